@@ -324,11 +324,3 @@ func Residual(a *Matrix, x, b []float64) float64 {
 	return math.Sqrt(rn / bn)
 }
 
-// order returns the fill-reducing permutation for a.
-func order(a *Matrix, opt *Options) []int {
-	p := make([]int, a.n)
-	for i := range p {
-		p[i] = i
-	}
-	return p
-}
