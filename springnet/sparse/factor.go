@@ -323,4 +323,3 @@ func Residual(a *Matrix, x, b []float64) float64 {
 	}
 	return math.Sqrt(rn / bn)
 }
-

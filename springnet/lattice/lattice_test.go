@@ -1,0 +1,72 @@
+package lattice
+
+import (
+	"crypto/sha256"
+	"encoding/binary"
+	"encoding/hex"
+	"math"
+	"testing"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+)
+
+func digestK(l *Lattice) string {
+	h := sha256.New()
+	var rec [24]byte
+	for j := 0; j < l.K.N(); j++ {
+		rows, vals := l.K.Col(j)
+		for p, i := range rows {
+			binary.LittleEndian.PutUint64(rec[0:], uint64(i+1))
+			binary.LittleEndian.PutUint64(rec[8:], uint64(j+1))
+			binary.LittleEndian.PutUint64(rec[16:], math.Float64bits(vals[p]))
+			h.Write(rec[:])
+		}
+	}
+	return hex.EncodeToString(h.Sum(nil))
+}
+
+func digestVec(x []float64) string {
+	h := sha256.New()
+	var rec [8]byte
+	for _, v := range x {
+		binary.LittleEndian.PutUint64(rec[:], math.Float64bits(v))
+		h.Write(rec[:])
+	}
+	return hex.EncodeToString(h.Sum(nil))
+}
+
+// TestDigests checks the generated K, mass and load bit for bit against the
+// SHA-256 check values of the lattice definition's table
+// (../shared/perf/README.md, "Lattice definition (bit-exact)"), which were
+// produced by the reference generator gen_lattice.py.
+func TestDigests(t *testing.T) {
+	for _, tc := range []struct {
+		nx, ny, nz int
+		n, nnz     int
+		k, m, b    string
+	}{
+		{2, 2, 2, 54, 411,
+			"3f4a12d59f7f9a17ffb410fecaac92f1aefbfdf4a65c242c32dd1b0c29059c71",
+			"667c1dab2c919e72eb61c58c729aff30d2b605d627efae1a41efd3389137790c",
+			"fe83c550681bb24054abd6644665662679dff35de0bd64985252b04fcf28a963"},
+		{4, 3, 5, 300, 3773,
+			"a88294f5df96f482c0116e9021fd2146e51e96fc0c0452892fae041a7ea133c6",
+			"4180b265ebea4cdb04620bdf86ae23e3634f9323f65d6bb7f9a900caf5cdc3bf",
+			"85d6f97c95ab8535a3433e7726b3d2b955c5763a45b6804c2b878770ea7b1dbb"},
+		{10, 10, 10, 3630, 63243,
+			"523505b236007b3dfaa0f22869e5884331db9e5e90ca13640efa18d3b88f000c",
+			"c1965bb884200d1e606974c87d0721040fd4553a7e513e6bd9be74ebe42175cb",
+			"2fa27b79c8aaea4d260fcdd7076e6d72128f628136ce82d897a7dd909ac88d71"},
+	} {
+		t.Run("", func(t *testing.T) {
+			l, err := New(tc.nx, tc.ny, tc.nz, nil)
+			require.NoError(t, err)
+			assert.Equal(t, tc.n, l.N())
+			assert.Equal(t, tc.nnz, l.K.NNZ())
+			assert.Equal(t, tc.k, digestK(l), "sha256_K")
+			assert.Equal(t, tc.m, digestVec(l.Mass), "sha256_M")
+			assert.Equal(t, tc.b, digestVec(l.Load), "sha256_b")
+		})
+	}
+}
