@@ -1,0 +1,163 @@
+package element
+
+import (
+	"fmt"
+	"math"
+)
+
+// SectionForces are the stress resultants at a cross-section of a beam, in
+// local axes, acting on the face whose outward normal is +x (the part of the
+// member towards end a acts on the part towards end b with the opposite
+// values):
+//
+//	N  axial force [N], tension positive
+//	Vy, Vz  shear forces along local y, z [N]
+//	T  torque about local x [N·m]
+//	My, Mz  bending moments about local y, z [N·m]
+//
+// All components follow the right-hand rule about the local axes on that
+// face, so the normal stress at local (y, z) in the section is
+//
+//	σ = N/A + My·z/Iy − Mz·y/Iz
+//
+// (a positive My stretches the fibres at +z, a positive Mz those at −y).
+type SectionForces struct {
+	N, Vy, Vz, T, My, Mz float64
+}
+
+// BeamForces holds the forces of a beam recovered from its end displacements.
+type BeamForces struct {
+	// Local holds the forces and moments the nodes apply to the member ends,
+	// in local axes, order Fx, Fy, Fz, Mx, My, Mz at end a then end b
+	// (the matrix convention: Local = K_local·u_local for the beam proper).
+	Local Vec12
+	// A and B are the section forces at end a and end b (see
+	// SectionForces): A = −Local[0:6], B = Local[6:12].
+	A, B SectionForces
+}
+
+// BeamEndForces returns the member forces of the beam from the global
+// displacements of its end nodes ua, ub (UX, UY, UZ [m], RX, RY, RZ [rad]).
+//
+// Where an end is released or sprung, the beam's own end rotation is found
+// from the static condensation, so a released moment comes out zero and a
+// sprung one equals the spring moment. The recovery assumes no load along
+// the span: N, Vy, Vz and T are constant and My, Mz vary linearly (see At).
+func BeamEndForces(f Frame, p BeamProps, ua, ub Vec6) BeamForces {
+	u := beamEndDisp(f, p, ua, ub)
+	kb := BeamLocalStiffness(p, f.L)
+	var out BeamForces
+	for r := range 12 {
+		s := 0.0
+		for c := range 12 {
+			s += kb[r][c] * u[c]
+		}
+		out.Local[r] = s
+	}
+	l := out.Local
+	out.A = SectionForces{N: -l[0], Vy: -l[1], Vz: -l[2], T: -l[3], My: -l[4], Mz: -l[5]}
+	out.B = SectionForces{N: l[6], Vy: l[7], Vz: l[8], T: l[9], My: l[10], Mz: l[11]}
+	return out
+}
+
+// At returns the section forces at the fraction s ∈ [0, 1] of the length
+// from end a, interpolating linearly between the ends; exact for a beam
+// without span loads.
+func (b BeamForces) At(s float64) SectionForces {
+	lerp := func(x, y float64) float64 { return x + s*(y-x) }
+	return SectionForces{
+		N:  lerp(b.A.N, b.B.N),
+		Vy: lerp(b.A.Vy, b.B.Vy),
+		Vz: lerp(b.A.Vz, b.B.Vz),
+		T:  lerp(b.A.T, b.B.T),
+		My: lerp(b.A.My, b.B.My),
+		Mz: lerp(b.A.Mz, b.B.Mz),
+	}
+}
+
+// beamEndDisp returns the local displacements of the beam proper (with
+// internal end rotations where released or sprung).
+func beamEndDisp(f Frame, p BeamProps, ua, ub Vec6) Vec12 {
+	u := localDisp(f, ua, ub)
+	if !p.hasJoints() {
+		return u
+	}
+	pm := newJoints(p, f.L).beamDOF()
+	var out Vec12
+	for r := range 12 {
+		s := 0.0
+		for c := range 12 {
+			s += pm[r][c] * u[c]
+		}
+		out[r] = s
+	}
+	return out
+}
+
+// DeflectedShape appends to dst n ≥ 2 points along the deflected member, from
+// end a to end b, in global coordinates [m]:
+//
+//	x_i = a + s_i·L·Ex + mag·Rᵀ·(u(s_i), v(s_i), w(s_i)),  s_i = i/(n−1)
+//
+// where u is linear between the end axial displacements and v, w are the
+// Hermite cubics through the end translations and the beam's end rotations
+// (θz = dv/dx, θy = −dw/dx), after releases and end springs. mag
+// magnifies the displacements for drawing (1 for true size). For a
+// Timoshenko beam the cubic is an approximation, fine for drawings. n < 2
+// is taken as 2.
+func DeflectedShape(dst []Vec3, f Frame, p BeamProps, ua, ub Vec6, n int, mag float64) []Vec3 {
+	if n < 2 {
+		n = 2
+	}
+	u := beamEndDisp(f, p, ua, ub)
+	l := f.L
+	for i := range n {
+		s := float64(i) / float64(n-1)
+		n1 := 1 - 3*s*s + 2*s*s*s
+		n2 := l * (s - 2*s*s + s*s*s)
+		n3 := 3*s*s - 2*s*s*s
+		n4 := l * (s*s*s - s*s)
+		loc := Vec3{
+			(1-s)*u[0] + s*u[6],
+			n1*u[1] + n2*u[5] + n3*u[7] + n4*u[11],
+			n1*u[2] - n2*u[4] + n3*u[8] - n4*u[10],
+		}
+		g := f.ToGlobal(loc)
+		pt := add(f.A, scale(f.Ex, s*l))
+		dst = append(dst, add(pt, scale(g, mag)))
+	}
+	return dst
+}
+
+// CombinedStress returns the largest absolute normal stress at the extreme
+// fibres of a section [Pa] from axial force and biaxial bending:
+//
+//	σ = N/A ± My/Sy ± Mz/Sz,   max |σ| = |N|/A + |My|/Sy + |Mz|/Sz
+//
+// with A the area [m²] and Sy, Sz the elastic section moduli about local y
+// and z [m³]. This is exact for sections whose extreme fibres in y and z
+// meet at a corner (rectangles, I and box sections) and conservative for
+// round ones, where √(My² + Mz²)/S applies. It returns an error if A, Sy or
+// Sz is not positive and finite.
+func CombinedStress(s SectionForces, a, sy, sz float64) (float64, error) {
+	for _, v := range [...]struct {
+		name string
+		v    float64
+	}{{"A", a}, {"Sy", sy}, {"Sz", sz}} {
+		if !(v.v > 0) || math.IsInf(v.v, 0) {
+			return 0, fmt.Errorf("element: stress: section %s = %g: must be positive and finite", v.name, v.v)
+		}
+	}
+	return math.Abs(s.N)/a + math.Abs(s.My)/sy + math.Abs(s.Mz)/sz, nil
+}
+
+// MaxStress returns the largest CombinedStress over the two ends of the
+// beam, which bound it along a span without load.
+func (b BeamForces) MaxStress(a, sy, sz float64) (float64, error) {
+	sa, err := CombinedStress(b.A, a, sy, sz)
+	if err != nil {
+		return 0, err
+	}
+	sb, _ := CombinedStress(b.B, a, sy, sz)
+	return math.Max(sa, sb), nil
+}
