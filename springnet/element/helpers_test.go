@@ -243,3 +243,14 @@ func isSym(a *mat.Dense) bool {
 	}
 	return true
 }
+
+// eigSym returns the eigenvalues of the symmetric part of a, ascending.
+func eigSym(t *testing.T, a *mat.Dense) []float64 {
+	t.Helper()
+	n, _ := a.Dims()
+	var es mat.EigenSym
+	require.True(t, es.Factorize(mat.NewSymDense(n, symData(a)), false))
+	v := es.Values(nil)
+	sort.Float64s(v)
+	return v
+}
