@@ -48,18 +48,20 @@ func beamLocalMass(m, mj, l float64) Mat12 {
 	return k
 }
 
-// BeamLumpedMass returns a lumped mass matrix of the beam in global axes:
-// m·L/2 on each translation of each end, mj·L/2 on the twist of each end,
-// and, if rotary is true, m·L³/24 on each end's rotation about local y and z
-// (the second moment of mass of half the member, as a slender rod, about its
-// end node: ∫₀^{L/2} m·x² dx). Without rotary the bending rotations carry
-// no mass, and a modal analysis must then condense or constrain them.
+// BeamLumpedMass returns a lumped (diagonal in local axes) mass matrix of the
+// beam in global axes: m·L/2 on each translation of each end, mj·L/2 on the
+// twist of each end, and, if rotary is true, m·L³/78 on each end's rotation
+// about local y and z. The 1/78 is HRZ lumping (Hinton, Rock and Zienkiewicz,
+// 1976): the diagonal of the consistent matrix scaled so the translations
+// carry the whole mass (4L²·mL/420 · 420/312 = mL³/78; Cook et al., 4th ed.,
+// §11.3). Without rotary the bending rotations carry no mass, and a modal
+// analysis must then condense or restrain them.
 func BeamLumpedMass(f Frame, m, mj float64, rotary bool) Mat12 {
 	var k Mat12
 	half := m * f.L / 2
 	rot := 0.0
 	if rotary {
-		rot = m * f.L * f.L * f.L / 24
+		rot = m * f.L * f.L * f.L / 78
 	}
 	for _, b := range [2]int{0, 6} {
 		k[b][b], k[b+1][b+1], k[b+2][b+2] = half, half, half
