@@ -159,7 +159,9 @@ func BeamStiffness(f Frame, p BeamProps) Mat12 {
 	if !p.hasJoints() {
 		kl = BeamLocalStiffness(p, f.L)
 	} else {
-		kl = newJoints(p, f.L).condensed()
+		var j joints
+		j.init(p, f.L)
+		kl = j.condensed()
 	}
 	return toGlobal(&kl, f)
 }
@@ -174,9 +176,9 @@ type joints struct {
 	x   [6][12]float64  // internal DOF as a function of the node DOF
 }
 
-// newJoints builds the augmented stiffness and solves for the internal DOF.
-func newJoints(p BeamProps, l float64) *joints {
-	j := &joints{kb: BeamLocalStiffness(p, l)}
+// init builds the augmented stiffness and solves for the internal DOF.
+func (j *joints) init(p BeamProps, l float64) {
+	*j = joints{kb: BeamLocalStiffness(p, l)}
 	var where [12]int // beam DOF → augmented index
 	for i := range where {
 		where[i] = i
@@ -212,7 +214,6 @@ func newJoints(p BeamProps, l float64) *joints {
 		}
 	}
 	j.solveInternal()
-	return j
 }
 
 // condensTol is the smallest pivot, relative to the original diagonal of the

@@ -82,7 +82,9 @@ func beamEndDisp(f Frame, p BeamProps, ua, ub Vec6) Vec12 {
 	if !p.hasJoints() {
 		return u
 	}
-	pm := newJoints(p, f.L).beamDOF()
+	var j joints
+	j.init(p, f.L)
+	pm := j.beamDOF()
 	var out Vec12
 	for r := range 12 {
 		s := 0.0

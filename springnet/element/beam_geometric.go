@@ -26,7 +26,9 @@ package element
 func BeamGeometricStiffness(f Frame, p BeamProps, n float64) Mat12 {
 	kg := beamLocalGeometric(n, f.L)
 	if p.hasJoints() {
-		pm := newJoints(p, f.L).beamDOF()
+		var j joints
+		j.init(p, f.L)
+		pm := j.beamDOF()
 		kg = congruent(&kg, &pm)
 	}
 	return toGlobal(&kg, f)

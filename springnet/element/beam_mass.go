@@ -19,7 +19,9 @@ package element
 func BeamConsistentMass(f Frame, p BeamProps, m, mj float64) Mat12 {
 	ml := beamLocalMass(m, mj, f.L)
 	if p.hasJoints() {
-		pm := newJoints(p, f.L).beamDOF()
+		var j joints
+		j.init(p, f.L)
+		pm := j.beamDOF()
 		ml = congruent(&ml, &pm)
 	}
 	return toGlobal(&ml, f)
