@@ -222,8 +222,10 @@ func Catalogue() []Material {
 	add := func(m Material) { cat = append(cat, m) }
 
 	// Structural steels.
-	add(astmSteel("steel A500 Gr B", 46e3*psi, "ASTM A500/A500M-18 Grade B: Fy = 46 ksi (315 MPa), round and shaped; older editions 42 ksi round, from memory"))
-	add(astmSteel("steel A500 Gr C", 50e3*psi, "ASTM A500/A500M-18 Grade C: Fy = 50 ksi (345 MPa), round and shaped; older editions 46 ksi round, from memory"))
+	// A500: the lower, round-tube yield of editions before A500-21 is used
+	// (shaped tubes: 46 and 50 ksi; A500-21 gives round tubes the shaped value).
+	add(astmSteel("steel A500 Gr B", 42e3*psi, "ASTM A500 Grade B: Fy = 42 ksi (290 MPa) round, 46 ksi (315 MPa) shaped (ASTM A500-07 table); later editions give round tubes the shaped value, from memory; the lower value is used"))
+	add(astmSteel("steel A500 Gr C", 46e3*psi, "ASTM A500 Grade C: Fy = 46 ksi (315 MPa) round, 50 ksi (345 MPa) shaped (A500-07); A500-21: 50 ksi for all shapes (Steel Tube Institute); the lower value is used"))
 	add(astmSteel("steel A36", 36e3*psi, "ASTM A36: Fy = 36 ksi (250 MPa)"))
 	add(enSteel("steel S235", 235*mpa, "EN 1993-1-1 Table 3.1: fy = 235 MPa, t <= 40 mm"))
 	add(enSteel("steel S355", 355*mpa, "EN 1993-1-1 Table 3.1: fy = 355 MPa, t <= 40 mm"))

@@ -19,10 +19,13 @@ import (
 //	η = 2ζ                                    loss factor at resonance (viscous equivalent)
 //	Q = 1 / (2ζ)                              quality factor
 //
-// The small-damping forms, good to about 1 % for ζ < 0.01, are
+// The small-damping forms are
 //
 //	η ≈ 2ζ ≈ δ/π ≈ ψ/(2π) ≈ 1/Q
 //
+// δ ≈ 2πζ is in error by about ζ²/2 (relative): 0.5 % at ζ = 0.1.
+// ψ ≈ 2δ is in error by about δ (relative), so ψ ≈ 4πζ is 1 % out
+// already at ζ ≈ 0.0016 and 6 % out at ζ = 0.01; use the exact forms for ψ.
 // The loss factor of a material (hysteretic damping) is η = ΔU / (2π U_max)
 // per cycle; it equals 2ζ at resonance, which is how the modal strain
 // energy method uses it.
@@ -81,7 +84,8 @@ func RatioFromSpecificCapacity(psi float64) float64 {
 	return RatioFromLogDecrement(-math.Log1p(-psi) / 2)
 }
 
-// Small-damping (approximate) forms, common practice for ζ below about 0.05.
+// Small-damping (approximate) forms: see the accuracy note at the top of
+// this file.
 
 // ApproxRatioFromLogDecrement returns ζ ≈ δ/(2π).
 func ApproxRatioFromLogDecrement(delta float64) float64 { return delta / (2 * math.Pi) }
@@ -91,3 +95,42 @@ func ApproxLogDecrementFromRatio(zeta float64) float64 { return 2 * math.Pi * ze
 
 // ApproxSpecificCapacityFromRatio returns ψ ≈ 4πζ (= 2δ).
 func ApproxSpecificCapacityFromRatio(zeta float64) float64 { return 4 * math.Pi * zeta }
+
+// FromLogDecrement returns every measure of damping for the logarithmic
+// decrement delta (exact forms). It fails unless delta >= 0 and finite.
+func FromLogDecrement(delta float64) (Damping, error) {
+	if math.IsNaN(delta) || math.IsInf(delta, 0) || delta < 0 {
+		return Damping{}, fmt.Errorf("materials: log decrement %g must be finite and non-negative", delta)
+	}
+	return FromRatio(RatioFromLogDecrement(delta))
+}
+
+// FromLossFactor returns every measure of damping for the loss factor eta,
+// taking ζ = η/2. It fails unless 0 <= eta < 2.
+func FromLossFactor(eta float64) (Damping, error) {
+	if math.IsNaN(eta) || eta < 0 || eta >= 2 {
+		return Damping{}, fmt.Errorf("materials: loss factor %g is not in [0, 2)", eta)
+	}
+	return FromRatio(RatioFromLossFactor(eta))
+}
+
+// FromQ returns every measure of damping for the quality factor q,
+// taking ζ = 1/(2Q); q = +Inf means no damping. It fails unless q > 0.5.
+func FromQ(q float64) (Damping, error) {
+	if math.IsNaN(q) || !(q > 0.5) {
+		return Damping{}, fmt.Errorf("materials: quality factor %g must be above 0.5 (damping ratio below 1)", q)
+	}
+	return FromRatio(RatioFromQ(q))
+}
+
+// FromSpecificCapacity returns every measure of damping for the specific
+// damping capacity psi (exact forms). It fails unless 0 <= psi < 1.
+func FromSpecificCapacity(psi float64) (Damping, error) {
+	if math.IsNaN(psi) || psi < 0 || psi >= 1 {
+		return Damping{}, fmt.Errorf("materials: specific damping capacity %g is not in [0, 1)", psi)
+	}
+	return FromRatio(RatioFromSpecificCapacity(psi))
+}
+
+// ApproxRatioFromSpecificCapacity returns ζ ≈ ψ/(4π).
+func ApproxRatioFromSpecificCapacity(psi float64) float64 { return psi / (4 * math.Pi) }

@@ -25,7 +25,8 @@ func Names() []string {
 // "dry sand" and "6061 T6 aluminum" all find their entries. A name that
 // is part of exactly one entry's words also finds it ("S355", "class 40").
 // A few trade synonyms are known ("mineral casting" and "polymer
-// concrete" for "epoxy granite").
+// concrete" for "epoxy granite"; "SPF", "DF-L", "SYP" for the graded
+// lumber).
 //
 // On a miss the error names the closest catalogue entries (by edit
 // distance); when the name fits several entries, it names them.
@@ -75,6 +76,9 @@ func synonyms() map[string]string {
 		"sand":             "sand dry",
 		"graycastiron":     "cast iron class 30",
 		"greycastiron":     "cast iron class 30",
+		"spf":              "timber spruce-pine-fir No.2",
+		"dfl":              "timber Douglas fir-larch No.2",
+		"syp":              "timber southern pine No.2",
 	}
 }
 
