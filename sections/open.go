@@ -12,15 +12,17 @@ var (
 )
 
 // Angle is an L-section with legs B along y and H along z, thickness T
-// and root (fillet) radius R; toe radii are ignored. Its geometric axes
-// are not principal unless it is equal-legged and even then they are
-// not: Props.Iyz is nonzero and Props.Principal gives the principal
-// second moments (use the minor one for buckling).
+// root (fillet) radius R and toe radius RT (the rounded inner edge at
+// each leg's tip, as rolled angles have). Its geometric axes are not
+// principal, even for equal legs: Props.Iyz is nonzero and
+// Props.Principal gives the principal second moments (use the minor one
+// for buckling).
 type Angle struct {
-	B float64 // leg along y [m]
-	H float64 // leg along z [m]
-	T float64 // thickness [m]
-	R float64 // root radius [m]; 0: none
+	B  float64 // leg along y [m]
+	H  float64 // leg along z [m]
+	T  float64 // thickness [m]
+	R  float64 // root radius [m]; 0: none
+	RT float64 // toe radius [m]; 0: none
 }
 
 // Channel is a C-section with parallel flanges: depth H along z, flange
@@ -88,6 +90,12 @@ func (a Angle) Properties() (Props, error) {
 	if err := checkRoot("root radius R", a.R); err != nil {
 		return Props{}, fmt.Errorf("sections: %v: %w", a, err)
 	}
+	if err := checkRoot("toe radius RT", a.RT); err != nil {
+		return Props{}, fmt.Errorf("sections: %v: %w", a, err)
+	}
+	if a.RT > a.T {
+		return Props{}, fmt.Errorf("sections: %v: toe radius %s is more than the thickness %s", a, mmText(a.RT), mmText(a.T))
+	}
 	if a.T+a.R >= math.Min(a.B, a.H) {
 		return Props{}, fmt.Errorf("sections: %v: thickness %s plus root radius %s leaves no leg beyond it (shorter leg %s)",
 			a, mmText(a.T), mmText(a.R), mmText(math.Min(a.B, a.H)))
@@ -96,14 +104,20 @@ func (a Angle) Properties() (Props, error) {
 	if a.R > 0 {
 		s = append(s, fillet(a.T, a.T, a.R, 1, 1)...)
 	}
+	if rt := a.RT; rt > 0 { // round off the inner edge of each tip
+		s = append(s, rectPrim(a.B-rt, a.B, a.T-rt, a.T).neg(), quarterPrim(a.B-rt, a.T-rt, rt, 1, 1),
+			rectPrim(a.T-rt, a.T, a.H-rt, a.H).neg(), quarterPrim(a.T-rt, a.H-rt, rt, 1, 1))
+	}
 	ap, err := s.props()
 	if err != nil {
 		return Props{}, fmt.Errorf("sections: %v: %w", a, err)
 	}
 	var l Loop
-	l = append(l, [2]float64{0, 0}, [2]float64{a.B, 0}, [2]float64{a.B, a.T})
+	l = append(l, [2]float64{0, 0}, [2]float64{a.B, 0})
+	l = arc(l, a.B-a.RT, a.T-a.RT, a.RT, 0, 0.5*math.Pi)
 	l = arc(l, a.T+a.R, a.T+a.R, a.R, 1.5*math.Pi, math.Pi)
-	l = append(l, [2]float64{a.T, a.H}, [2]float64{0, a.H})
+	l = arc(l, a.T-a.RT, a.H-a.RT, a.RT, 0, 0.5*math.Pi)
+	l = append(l, [2]float64{0, a.H})
 	j := (a.B + a.H - a.T) * a.T * a.T * a.T / 3
 	return finish(ap, j, 5.0/6*a.B*a.T, 5.0/6*a.H*a.T, []Loop{l}), nil
 }

@@ -88,32 +88,44 @@ func neighbours(x float64, n int) []float64 {
 	return out
 }
 
-// formatDims writes the lengths vs (SI) in the unit that gives the
-// shortest exact text, as "a x b x c unit" joined by sep, and returns the
-// unit chosen. Metres always round-trip exactly.
+// formatDims writes the lengths vs (SI) in one unit and returns the
+// texts and the unit. It takes mm or in, whichever writes all values
+// exactly in fewer characters (mm on a tie), else the first of cm, m, ft
+// that is exact; metres always round-trip exactly.
 func formatDims(vs []float64) (dims []string, unit lengthUnit) {
-	bestLen := math.MaxInt
-	for _, u := range lengthUnits {
+	try := func(u lengthUnit) ([]string, int, bool) {
 		out := make([]string, len(vs))
-		total, ok := 0, true
+		total := 0
 		for i, v := range vs {
 			s, good := u.formatIn(v, 1)
 			if !good {
-				ok = false
-				break
+				return nil, 0, false
 			}
 			out[i] = s
 			total += len(s)
 		}
-		if ok && total < bestLen {
-			bestLen, dims, unit = total, out, u
+		return out, total, true
+	}
+	mm, _ := findUnit("mm")
+	in, _ := findUnit("in")
+	dmm, nmm, okmm := try(mm)
+	din, nin, okin := try(in)
+	switch {
+	case okmm && (!okin || nmm <= nin):
+		return dmm, mm
+	case okin:
+		return din, in
+	}
+	for _, name := range []string{"cm", "m", "ft"} {
+		u, _ := findUnit(name)
+		if d, _, ok := try(u); ok {
+			return d, u
 		}
 	}
-	if dims == nil { // non-finite values: print them plainly in metres
-		unit = lengthUnits[3]
-		for _, v := range vs {
-			dims = append(dims, strconv.FormatFloat(v, 'g', -1, 64))
-		}
+	// non-finite values: print them plainly in metres
+	unit, _ = findUnit("m")
+	for _, v := range vs {
+		dims = append(dims, strconv.FormatFloat(v, 'g', -1, 64))
 	}
 	return dims, unit
 }
