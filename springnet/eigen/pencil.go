@@ -1,0 +1,178 @@
+package eigen
+
+import (
+	"errors"
+	"fmt"
+	"math"
+
+	"github.com/trestle-go/trestle/springnet/sparse"
+	"gonum.org/v1/gonum/floats"
+)
+
+// pencil builds A(α) = K + α·B on the union of the patterns of K and B, so
+// that every shift gives the same pattern and one sparse.Factor keeps its
+// symbolic analysis across shifts.
+type pencil struct {
+	k, b     *sparse.Matrix
+	bld      *sparse.Builder
+	f        sparse.Factor
+	opt      sparse.Options
+	a        *sparse.Matrix // the matrix last factorised successfully
+	alpha    float64        // its α
+	ok       bool
+	analyzed bool
+	count    int // numeric factorisations
+	r        []float64
+	x        []float64
+}
+
+func newPencil(k, b *sparse.Matrix, s *Settings) *pencil {
+	return &pencil{
+		k: k, b: b,
+		bld: sparse.NewBuilder(k.N()),
+		opt: sparse.Options{Ordering: s.Ordering, Mode: sparse.LDLT, Coords: s.Coords},
+		r:   make([]float64, k.N()),
+		x:   make([]float64, k.N()),
+	}
+}
+
+// at assembles K + α·B.
+func (pc *pencil) at(alpha float64) *sparse.Matrix {
+	n := pc.k.N()
+	pc.bld.Reset(n)
+	for j := 0; j < n; j++ {
+		rows, vals := pc.k.Col(j)
+		for p, i := range rows {
+			pc.bld.Add(i, j, vals[p])
+		}
+		rows, vals = pc.b.Col(j)
+		for p, i := range rows {
+			pc.bld.Add(i, j, alpha*vals[p])
+		}
+	}
+	return pc.bld.Matrix()
+}
+
+// factor factorises K + α·B (LDLᵀ) and checks the factorisation with the
+// residual of one solve. It returns a *sparse.PivotError for a singular
+// matrix and errUnstable when the solve residual is poor.
+func (pc *pencil) factor(alpha float64) error {
+	a := pc.at(alpha)
+	pc.ok = false
+	if !pc.analyzed {
+		if err := pc.f.Analyze(a, &pc.opt); err != nil {
+			return fmt.Errorf("eigen: sparse analysis: %w", err)
+		}
+		pc.analyzed = true
+	}
+	pc.count++
+	if err := pc.f.Factorize(a); err != nil {
+		return err
+	}
+	pc.a, pc.alpha = a, alpha
+	// Guard the factorisation without pivoting: solve with a fixed
+	// right-hand side and check the residual.
+	b := make([]float64, a.N())
+	for i := range b {
+		b[i] = 1 + float64(i%7)/7
+	}
+	pc.f.Solve(pc.x, b)
+	if res := sparse.Residual(a, pc.x, b); !(res <= factorResidualTol) {
+		return errUnstable
+	}
+	pc.ok = true
+	return nil
+}
+
+// factorResidualTol is the largest relative residual ‖A·x − b‖/‖b‖ of the
+// check solve accepted after a factorisation. LDLᵀ without pivoting of an
+// indefinite matrix can lose accuracy through pivot growth; a residual
+// above this means the factors (and their inertia) are not trusted.
+const factorResidualTol = 1e-8
+
+var errUnstable = errors.New("eigen: unstable factorisation (large solve residual)")
+
+// solve sets dst = A⁻¹·b for the last factorisation, with one step of
+// iterative refinement when the residual is not small, and returns the
+// relative residual.
+func (pc *pencil) solve(dst, b []float64) float64 {
+	pc.f.Solve(dst, b)
+	r := pc.r
+	pc.a.MulVec(r, dst)
+	floats.Sub(r, b) // r = A·x − b
+	bn := floats.Norm(b, 2)
+	if bn == 0 {
+		return 0
+	}
+	res := floats.Norm(r, 2) / bn
+	if res > 1e-12 {
+		pc.f.Solve(pc.x, r)
+		floats.Sub(dst, pc.x)
+		pc.a.MulVec(r, dst)
+		floats.Sub(r, b)
+		res = floats.Norm(r, 2) / bn
+	}
+	return res
+}
+
+// solveResidualTol is the largest relative residual of a Lanczos solve
+// accepted after refinement.
+const solveResidualTol = 1e-8
+
+// shiftInvert is OP = (K − σM)⁻¹·M, self-adjoint in the M-inner product.
+type shiftInvert struct {
+	pc *pencil // K + α·M with α = −σ
+	m  *sparse.Matrix
+}
+
+func (op *shiftInvert) apply(dst, x, mx []float64) error {
+	if res := op.pc.solve(dst, mx); !(res <= solveResidualTol) {
+		return fmt.Errorf("eigen: solve with K − σM (σ = %.6g) has relative residual %.3g", -op.pc.alpha, res)
+	}
+	return nil
+}
+
+func (op *shiftInvert) bmul(dst, x []float64) { op.m.MulVec(dst, x) }
+
+// checkMatrix reports a NaN or Inf entry of a.
+func checkMatrix(name string, a *sparse.Matrix) error {
+	for j := 0; j < a.N(); j++ {
+		rows, vals := a.Col(j)
+		for p, v := range vals {
+			if math.IsNaN(v) || math.IsInf(v, 0) {
+				return fmt.Errorf("eigen: %s(%d, %d) = %v", name, rows[p], j, v)
+			}
+		}
+	}
+	return nil
+}
+
+// norm1 returns the largest absolute column sum of the symmetric a.
+func norm1(a *sparse.Matrix) float64 {
+	n := a.N()
+	s := make([]float64, n)
+	for j := 0; j < n; j++ {
+		rows, vals := a.Col(j)
+		for p, i := range rows {
+			v := math.Abs(vals[p])
+			s[j] += v
+			if i != j {
+				s[i] += v
+			}
+		}
+	}
+	var m float64
+	for _, v := range s {
+		m = max(m, v)
+	}
+	return m
+}
+
+// trace returns the sum of the diagonal of a.
+func trace(a *sparse.Matrix) float64 {
+	var t float64
+	for j := 0; j < a.N(); j++ {
+		t += a.At(j, j)
+	}
+	return t
+}
