@@ -7,7 +7,7 @@ package element
 //	           [ −c·cᵀ  c·cᵀ ]
 //
 // with c = f.Ex the unit vector from a to b (Przemieniecki, Theory of
-// Matrix Structural Analysis, ch. 5, pin-jointed member). ea is the axial
+// Matrix Structural Analysis, pin-jointed member). ea is the axial
 // stiffness E·A [N].
 func BarStiffness(f Frame, ea float64) Mat6 {
 	return axialBlock(f.Ex, ea/f.L)
@@ -28,8 +28,8 @@ func BarAxialForce(f Frame, ea float64, ua, ub Vec3) float64 {
 //	Kg = (N/L)·[ I − c·cᵀ   −(I − c·cᵀ) ]
 //	           [ −(I − c·cᵀ)  I − c·cᵀ  ]
 //
-// (Przemieniecki, ch. 15; McGuire, Gallagher and Ziemian, Matrix Structural
-// Analysis, 2nd ed., ch. 9, truss element). For linear buckling solve
+// (Przemieniecki, stability chapter; McGuire, Gallagher and Ziemian, Matrix
+// Structural Analysis, 2nd ed., truss element). For linear buckling solve
 // (K + λ·Kg)·φ = 0 with Kg built from the reference axial forces; a
 // compressed bar (n < 0) softens the structure.
 func BarGeometricStiffness(f Frame, n float64) Mat6 {
@@ -56,7 +56,7 @@ func BarGeometricStiffness(f Frame, n float64) Mat6 {
 //	M = (m·L/6)·[ 2I  I ]
 //	            [ I  2I ]
 //
-// (Przemieniecki, ch. 11, pin-jointed member with linear displacement
+// (Przemieniecki, inertia properties of a pin-jointed member with linear displacement
 // along and across the axis). It does not depend on the member direction.
 func BarConsistentMass(f Frame, m float64) Mat6 {
 	var k Mat6

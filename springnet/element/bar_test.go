@@ -28,7 +28,7 @@ func TestBarStiffnessInvariants(t *testing.T) {
 	k := element.BarStiffness(f, ea)
 	d := dense6(k)
 	assert.True(t, isSym(d), "symmetric")
-	// A pin-ended bar resists only stretching: rank 1 (Przemieniecki ch. 5).
+	// A pin-ended bar resists only stretching: rank 1 (Przemieniecki, pin-jointed member).
 	assert.Equal(t, 1, rank(t, d, 1e-12))
 	// Rigid-body motion gives no force.
 	for i := range 6 {
@@ -119,8 +119,8 @@ func TestBarGeometricStiffness(t *testing.T) {
 }
 
 // TestBarMass: a rigid translation of unit speed carries the whole mass,
-// uᵀ·M·u = m·L, for both the consistent and the lumped matrix (Przemieniecki
-// ch. 11: mass matrices must reproduce rigid-body kinetic energy).
+// uᵀ·M·u = m·L, for both the consistent and the lumped matrix (Przemieniecki,
+// inertia properties: mass matrices must reproduce rigid-body kinetic energy).
 func TestBarMass(t *testing.T) {
 	f := skewFrame(t)
 	const m = 7.85 // kg/m: 1000 mm² of steel at 7850 kg/m³
@@ -147,7 +147,7 @@ func TestBarMass(t *testing.T) {
 			}
 		})
 	}
-	// Consistent mass: m·L/6·[2I, I; I, 2I] (Przemieniecki eq. 11.20).
+	// Consistent mass: m·L/6·[2I, I; I, 2I] (Przemieniecki, pin-jointed member; Cook et al., bar element).
 	c := element.BarConsistentMass(f, m)
 	assert.InEpsilon(t, m*f.L/3, c[0][0], relTol)
 	assert.InEpsilon(t, m*f.L/6, c[1][4], relTol)

@@ -100,9 +100,9 @@ func (p BeamProps) hasJoints() bool {
 //
 // and the x–z block over (w, θy) is the same with the signs of the
 // w–θ couplings reversed, since θy = −dw/dx (Przemieniecki, Theory of Matrix
-// Structural Analysis, eq. 5.116 with shear deformation; Cook, Malkus,
+// Structural Analysis, beam element with shear deformation; Cook, Malkus,
 // Plesha and Witt, Concepts and Applications of Finite Element Analysis,
-// 4th ed., §2.3–2.4 and the Timoshenko beam in ch. 16).
+// 4th ed., beam and Timoshenko beam elements).
 func BeamLocalStiffness(p BeamProps, l float64) Mat12 {
 	var k Mat12
 	ea := p.EA / l

@@ -11,7 +11,8 @@ package element
 //
 // and the x–z block over (w, θy) is the same with the w–θ couplings
 // reversed (McGuire, Gallagher and Ziemian, Matrix Structural Analysis, 2nd
-// ed., eq. 9.16 without the torsion terms; Przemieniecki, ch. 15).
+// ed., beam-column geometric stiffness without the torsion terms;
+// Przemieniecki, stability chapter).
 //
 // Simplifications, stated: the coupling of torsion with axial force
 // (the N·Ip/(A·L) terms, which govern torsional buckling of open sections)

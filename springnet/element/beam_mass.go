@@ -12,8 +12,8 @@ package element
 //	           −13L  −3L²  −22L   4L² ]
 //
 // and the x–z block over (w, θy) with the w–θ couplings reversed
-// (Przemieniecki, Theory of Matrix Structural Analysis, eq. 11.42; Cook et
-// al., 4th ed., §11.3). Rotary inertia of the cross-section in bending is
+// (Przemieniecki, Theory of Matrix Structural Analysis, inertia properties
+// of a beam element; Cook et al., 4th ed., consistent mass). Rotary inertia of the cross-section in bending is
 // not included. Releases and end springs are honoured by the congruence
 // Pᵀ·M·P with the static map of BeamStiffness; p serves only for those.
 func BeamConsistentMass(f Frame, p BeamProps, m, mj float64) Mat12 {
@@ -54,9 +54,9 @@ func beamLocalMass(m, mj, l float64) Mat12 {
 // beam in global axes: m·L/2 on each translation of each end, mj·L/2 on the
 // twist of each end, and, if rotary is true, m·L³/78 on each end's rotation
 // about local y and z. The 1/78 is HRZ lumping (Hinton, Rock and Zienkiewicz,
-// 1976): the diagonal of the consistent matrix scaled so the translations
+// 1976, from memory): the diagonal of the consistent matrix scaled so the translations
 // carry the whole mass (4L²·mL/420 · 420/312 = mL³/78; Cook et al., 4th ed.,
-// §11.3). Without rotary the bending rotations carry no mass, and a modal
+// lumped mass). Without rotary the bending rotations carry no mass, and a modal
 // analysis must then condense or restrain them.
 func BeamLumpedMass(f Frame, m, mj float64, rotary bool) Mat12 {
 	var k Mat12

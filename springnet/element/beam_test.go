@@ -95,7 +95,7 @@ func cantilever(t *testing.T, l float64, p element.BeamProps) (*system, element.
 // TestCantilever checks a single element against Euler–Bernoulli and
 // Timoshenko closed forms for a cantilever (Gere and Timoshenko, Mechanics of
 // Materials, table of beam deflections; Roark's Formulas for Stress and
-// Strain, table 8.1 case 1a). One cubic element is exact for end loads.
+// Strain, cantilever with end load; table number not quoted). One cubic element is exact for end loads.
 func TestCantilever(t *testing.T) {
 	const l, p, m = 1.6, 2e3, 500.0
 	timo := demo
@@ -142,7 +142,7 @@ func TestCantilever(t *testing.T) {
 
 // TestBeamSupportCases covers support conditions made with end restraints,
 // releases and springs, against closed forms (Gere and Timoshenko, Mechanics
-// of Materials, statically indeterminate beams; Roark table 8.1).
+// of Materials, statically indeterminate beams).
 func TestBeamSupportCases(t *testing.T) {
 	const l, p, m = 1.6, 2e3, 500.0
 	ei := demo.EIz

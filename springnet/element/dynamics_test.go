@@ -39,7 +39,7 @@ func bucklingLoad(t *testing.T, s *system, kg *mat.Dense) float64 {
 
 // TestEulerColumn: a pinned–pinned column, buckling about its weaker axis
 // (EIz < EIy), P = π²·EIz/L² (Euler; Timoshenko and Gere, Theory of Elastic
-// Stability, §2.1). One element gives 12·EI/L² (hand calculation with the
+// Stability, pin-ended column). One element gives 12·EI/L² (hand calculation with the
 // consistent geometric stiffness: antisymmetric end rotations, 2EI/L = P·L/6);
 // more elements converge from above; 8 within 0.5 % (task brief).
 func TestEulerColumn(t *testing.T) {
@@ -74,7 +74,8 @@ func TestEulerColumn(t *testing.T) {
 // TestFixedPinnedColumnByRelease: a column fixed at the base and pinned at
 // the top, the pin made by releasing the last element's top end. Critical load
 // P = (4.4934)²·EI/L², 4.4934 the first root of tan x = x (Timoshenko and
-// Gere, Theory of Elastic Stability, §2.5; effective length 0.699 L).
+// Gere, Theory of Elastic Stability, column fixed at one end and pinned at
+// the other; effective length 0.699 L).
 func TestFixedPinnedColumnByRelease(t *testing.T) {
 	const l, n = 2.5, 8
 	const x1 = 4.493409457909064 // first positive root of tan x = x
@@ -103,7 +104,7 @@ func TestFixedPinnedColumnByRelease(t *testing.T) {
 
 // TestPinnedBeamGeometricIsBar: a beam pinned at both ends keeps only the
 // chord rotation, whose geometric stiffness is the bar's (N/L)(I − c·cᵀ)
-// (Przemieniecki, ch. 15: string stiffness of a pin-ended member).
+// (Przemieniecki, stability chapter: string stiffness of a pin-ended member).
 func TestPinnedBeamGeometricIsBar(t *testing.T) {
 	f := skewFrame(t)
 	const n = -3e4
@@ -141,7 +142,7 @@ func TestBeamGeometricInvariants(t *testing.T) {
 // translation m·L; rotation about the member's centre across the axis
 // m·L³/12 (slender rod about its centre, any dynamics text); twist mj·L.
 // The consistent matrix reproduces all three exactly because rigid motions
-// lie in its shape functions (Przemieniecki, ch. 11); lumped matrices keep
+// lie in its shape functions (Przemieniecki, inertia properties); lumped matrices keep
 // the translation only.
 func TestBeamMassRigidBody(t *testing.T) {
 	f := skewFrame(t)

@@ -146,7 +146,7 @@ func (s *system) solve(t *testing.T) []float64 {
 
 // genEig returns, ascending, the eigenvalues μ of A·x = μ·B·x for symmetric A
 // and symmetric positive definite B, by the Cholesky reduction
-// B = L·Lᵀ, C = L⁻¹·A·L⁻ᵀ (Golub and Van Loan, Matrix Computations, §8.7).
+// B = L·Lᵀ, C = L⁻¹·A·L⁻ᵀ (Golub and Van Loan, Matrix Computations, symmetric-definite problem).
 // gonum has no dense generalized symmetric solver, so this is the reference.
 func genEig(t *testing.T, a, b *mat.Dense) []float64 {
 	t.Helper()
@@ -253,4 +253,20 @@ func eigSym(t *testing.T, a *mat.Dense) []float64 {
 	v := es.Values(nil)
 	sort.Float64s(v)
 	return v
+}
+
+// solve6 solves a 6×6 system with gonum and checks the residual.
+func solve6(t *testing.T, k element.Mat6, f [6]float64) [6]float64 {
+	t.Helper()
+	a := dense6(k)
+	b := mat.NewVecDense(6, f[:])
+	var x mat.VecDense
+	require.NoError(t, x.SolveVec(a, b))
+	var r mat.VecDense
+	r.MulVec(a, &x)
+	r.SubVec(&r, b)
+	require.LessOrEqual(t, mat.Norm(&r, 2), residualTol*mat.Norm(b, 2))
+	var out [6]float64
+	copy(out[:], x.RawVector().Data)
+	return out
 }

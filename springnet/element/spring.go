@@ -87,3 +87,52 @@ func (k Spring6) Valid() bool {
 	}
 	return true
 }
+
+// SpringStiffnessInAxes returns the 12×12 global stiffness of a two-node
+// spring whose six stiffnesses act along and about the axes given by the
+// rows of r (orthonormal, global components; f.Rotation() of a Frame, for
+// instance). With T = diag(R, R, R, R):
+//
+//	K = Tᵀ·[ D  −D ]·T
+//	       [ −D  D ]
+//
+// It is SpringStiffness for r = I. Like SpringStiffness it ignores the
+// positions of the ends.
+func SpringStiffnessInAxes(r Mat3, k Spring6) Mat12 {
+	d := SpringStiffness(k)
+	return toGlobal(&d, Frame{Ex: r[0], Ey: r[1], Ez: r[2]})
+}
+
+// GroundSpringStiffnessInAxes returns the 6×6 global stiffness of a ground
+// spring whose stiffnesses act along and about the rows of r:
+// K = diag(Rᵀ·Dt·R, Rᵀ·Dr·R).
+func GroundSpringStiffnessInAxes(r Mat3, k Spring6) Mat6 {
+	var m Mat6
+	for i := range 3 {
+		for j := range 3 {
+			var t, q float64
+			for a := range 3 {
+				t += r[a][i] * k[a] * r[a][j]
+				q += r[a][i] * k[a+3] * r[a][j]
+			}
+			m[i][j], m[i+3][j+3] = t, q
+		}
+	}
+	return m
+}
+
+// SpringForceInAxes returns the six forces and moments of a two-node spring
+// with axes r, in those axes [N, N·m]; positive when extended, as for
+// SpringForce.
+func SpringForceInAxes(r Mat3, k Spring6, ua, ub Vec6) Vec6 {
+	var f Vec6
+	for i := range 3 {
+		var dt, dr float64
+		for j := range 3 {
+			dt += r[i][j] * (ub[j] - ua[j])
+			dr += r[i][j] * (ub[j+3] - ua[j+3])
+		}
+		f[i], f[i+3] = k[i]*dt, k[i+3]*dr
+	}
+	return f
+}

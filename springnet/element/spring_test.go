@@ -90,3 +90,47 @@ func TestAxialSpringMatchesBar(t *testing.T) {
 	require.True(t, element.Spring6{1, 0, 2, 0, 0, 0}.Valid())
 	assert.False(t, element.Spring6{1, -1, 2, 0, 0, 0}.Valid())
 }
+
+// TestSpringInAxes: a spring with stiffness only along its first axis, that
+// axis being a member's Ex, is the axial spring along the member
+// (definition); a load along an axis of a ground spring moves the node F/k
+// along that axis only (Hooke's law in the rotated axes).
+func TestSpringInAxes(t *testing.T) {
+	f := skewFrame(t)
+	r := f.Rotation()
+	const k = 2.5e6
+	two := element.SpringStiffnessInAxes(r, element.Spring6{k})
+	ax := element.AxialSpringStiffness(f, k)
+	for i := range 6 {
+		for j := range 6 {
+			ri, rj := (i/3)*6+i%3, (j/3)*6+j%3
+			assert.InDelta(t, ax[i][j], two[ri][rj], relTol*k)
+		}
+	}
+	ks := element.Spring6{1e6, 2e6, 3e6, 4e3, 5e3, 6e3}
+	g := element.GroundSpringStiffnessInAxes(r, ks)
+	assert.True(t, isSym(dense6(g)))
+	// Load F along Ey (the second axis): u = F/k₂ along Ey.
+	const load = 500.0
+	var fv [6]float64
+	for i := range 3 {
+		fv[i] = load * f.Ey[i]
+	}
+	u := solve6(t, g, fv)
+	want := load / ks[1]
+	assertVec(t, element.Vec3{want * f.Ey[0], want * f.Ey[1], want * f.Ey[2]}, element.Vec3{u[0], u[1], u[2]}, 1e-9*want, "ground spring")
+	// Two-node spring in axes: extension along Ez recovered as k₃·δ.
+	const d = 1e-3
+	ub := element.Vec6{d * f.Ez[0], d * f.Ez[1], d * f.Ez[2]}
+	fr := element.SpringForceInAxes(r, ks, element.Vec6{}, ub)
+	assert.InEpsilon(t, ks[2]*d, fr[2], relTol)
+	assert.InDelta(t, 0, fr[0], 1e-9*ks[2]*d)
+	// Rigid motions of coincident ends: no force.
+	kk := element.SpringStiffnessInAxes(r, ks)
+	for _, rb := range rigidBasis(f.A, f.A) {
+		fr := mul12(kk, rb)
+		for i := range 12 {
+			assert.InDelta(t, 0, fr[i], 1e-9*ks[2])
+		}
+	}
+}
