@@ -3,6 +3,7 @@ package sparse
 import (
 	"fmt"
 	"math"
+	"slices"
 )
 
 // Ordering selects the fill-reducing ordering used by Factor.Analyze.
@@ -65,31 +66,56 @@ func (e *PivotError) Error() string {
 // Factor is a sparse L·D·Lᵀ factorisation of a symmetric matrix, P·A·Pᵀ =
 // L·D·Lᵀ. The zero Factor is ready for Analyze. A Factor keeps its ordering
 // and symbolic analysis, so Factorize may be called again with a matrix of
-// the same pattern and new values without a new Analyze.
+// the same pattern and new values without a new Analyze; it then reuses
+// all its storage and allocates nothing.
+//
+// The numeric factorisation is multifrontal over relaxed supernodes, with
+// dense blocked kernels (see doc.go). A Factor is not safe for concurrent
+// use: Solve uses internal workspace.
 type Factor struct {
-	n        int
-	opt      Options
-	perm     []int // perm[k] = original index of pivot k
-	inv      []int // inv[i] = pivot position of original index i
-	aColPtr  []int // pattern of the analysed matrix, to check reuse
-	aRowIdx  []int
-	cp, ci   []int // upper triangle of P·A·Pᵀ, CSC
-	cmap     []int // position in c of each stored entry of A
-	cx       []float64
-	parent   []int
-	lp       []int
-	li       []int
-	lx       []float64
-	d        []float64
-	lnz      []int
-	flag     []int
-	pattern  []int
-	y        []float64
-	ok       bool
-	neg, pos int
+	n       int
+	opt     Options
+	perm    []int // perm[k] = original index of pivot k
+	inv     []int // inv[i] = pivot position of original index i
+	aColPtr []int // pattern of the analysed matrix, to check reuse
+	aRowIdx []int
+
+	// Lower triangle of C = P·A·Pᵀ: values in column order, the map from
+	// A's entries, and the front offset of each entry.
+	cp    []int
+	cmap  []int
+	cdiag []int // position in cx of each column's diagonal, or -1
+	cx    []float64
+	fo    []int // offset of C's entry in its supernode's front
+
+	nnzl int // entries of L including the diagonal (exact, no padding)
+
+	// Supernodes, in postorder: columns sfirst[s]..sfirst[s+1]-1; row
+	// structure srow[sptr[s]:sptr[s+1]] (its own columns first); L block
+	// lx[lptr[s]:lptr[s+1]] row-major, rows × columns.
+	ns      int
+	sfirst  []int
+	sptr    []int
+	srow    []int
+	lptr    []int
+	lx      []float64
+	d       []float64
+	cptr    []int // children of s: child[cptr[s]:cptr[s+1]], increasing
+	child   []int
+	relptr  []int // rel[relptr[s]:relptr[s+1]]: positions in the parent's front
+	rel     []int // of s's update rows
+	front   []float64
+	stack   []float64
+	work    []float64
+	y       []float64
+	ok      bool
+	neg     int
+	pos     int
+	frontMx int
 }
 
-// Analyze computes the ordering and the symbolic factorisation of A.
+// Analyze computes the ordering and the symbolic factorisation of A:
+// elimination tree, column counts, supernodes and the storage of L.
 func (f *Factor) Analyze(a *Matrix, opt *Options) error {
 	if opt != nil {
 		f.opt = *opt
@@ -99,170 +125,289 @@ func (f *Factor) Analyze(a *Matrix, opt *Options) error {
 	if f.opt.PivotTol == 0 {
 		f.opt.PivotTol = DefaultPivotTol
 	}
+	if f.opt.Coords != nil && len(f.opt.Coords) != a.n {
+		return fmt.Errorf("sparse: Options.Coords has %d points for a matrix of order %d", len(f.opt.Coords), a.n)
+	}
 	n := a.n
 	f.n = n
 	f.ok = false
-	f.perm = order(a, &f.opt)
-	f.inv = make([]int, n)
+	perm0 := order(a, &f.opt)
+	return f.analyzePerm(a, perm0)
+}
+
+// analyzePerm runs the symbolic analysis of a for the ordering perm0,
+// which it refines by a postorder of the elimination tree.
+func (f *Factor) analyzePerm(a *Matrix, perm0 []int) error {
+	n := a.n
+	inv := make([]int, n)
+	for k, i := range perm0 {
+		inv[i] = k
+	}
+	pat := permuteLower(a, inv)
+	parent := etree(n, pat.cp, pat.ci)
+	post := postorder(parent)
+	f.perm = make([]int, n)
+	for k, j := range post {
+		f.perm[k] = perm0[j]
+	}
+	f.inv = inv
 	for k, i := range f.perm {
 		f.inv[i] = k
 	}
+	pat = permuteLower(a, f.inv)
+	parent = etree(n, pat.cp, pat.ci)
+	cc := colCounts(n, pat.cp, pat.ci, parent)
+	f.nnzl = 0
+	for _, c := range cc {
+		f.nnzl += c
+	}
 	f.aColPtr = append(f.aColPtr[:0], a.colPtr...)
 	f.aRowIdx = append(f.aRowIdx[:0], a.rowIdx...)
-
-	// Upper triangle of C = P·A·Pᵀ in CSC, with a map from A's entries.
-	f.cp = make([]int, n+1)
+	f.cp, f.cmap = pat.cp, pat.cmap
+	f.cx = make([]float64, len(pat.ci))
+	f.cdiag = make([]int, n)
 	for j := 0; j < n; j++ {
-		for p := a.colPtr[j]; p < a.colPtr[j+1]; p++ {
-			pi, pj := f.inv[a.rowIdx[p]], f.inv[j]
-			f.cp[max(pi, pj)+1]++
-		}
-	}
-	for k := 0; k < n; k++ {
-		f.cp[k+1] += f.cp[k]
-	}
-	next := append([]int(nil), f.cp[:n]...)
-	f.ci = make([]int, a.NNZ())
-	f.cx = make([]float64, a.NNZ())
-	f.cmap = make([]int, a.NNZ())
-	for j := 0; j < n; j++ {
-		for p := a.colPtr[j]; p < a.colPtr[j+1]; p++ {
-			pi, pj := f.inv[a.rowIdx[p]], f.inv[j]
-			col, row := max(pi, pj), min(pi, pj)
-			q := next[col]
-			next[col]++
-			f.ci[q] = row
-			f.cmap[p] = q
+		f.cdiag[j] = -1
+		if p := pat.cp[j]; p < pat.cp[j+1] && pat.ci[p] == j {
+			f.cdiag[j] = p
 		}
 	}
 
-	// Elimination tree and column counts (Davis, LDL, ACM TOMS 2005).
-	f.parent = make([]int, n)
-	f.lnz = make([]int, n)
-	f.flag = make([]int, n)
-	for k := 0; k < n; k++ {
-		f.parent[k] = -1
-		f.flag[k] = k
-		for p := f.cp[k]; p < f.cp[k+1]; p++ {
-			for i := f.ci[p]; i < k && f.flag[i] != k; i = f.parent[i] {
-				if f.parent[i] == -1 {
-					f.parent[i] = k
+	// Supernodes and their tree.
+	f.sfirst = supernodes(n, parent, cc)
+	ns := len(f.sfirst) - 1
+	f.ns = ns
+	snodeOf := make([]int, n)
+	for s := 0; s < ns; s++ {
+		for j := f.sfirst[s]; j < f.sfirst[s+1]; j++ {
+			snodeOf[j] = s
+		}
+	}
+	sparent := make([]int, ns)
+	for s := 0; s < ns; s++ {
+		sparent[s] = -1
+		if p := parent[f.sfirst[s+1]-1]; p != -1 {
+			sparent[s] = snodeOf[p]
+		}
+	}
+	f.cptr = make([]int, ns+1)
+	for s := 0; s < ns; s++ {
+		if p := sparent[s]; p != -1 {
+			f.cptr[p+1]++
+		}
+	}
+	for s := 0; s < ns; s++ {
+		f.cptr[s+1] += f.cptr[s]
+	}
+	f.child = make([]int, f.cptr[ns])
+	next := make([]int, ns)
+	copy(next, f.cptr[:ns])
+	for s := 0; s < ns; s++ {
+		if p := sparent[s]; p != -1 {
+			f.child[next[p]] = s
+			next[p]++
+		}
+	}
+
+	// Row structures: own columns, then the union of A's rows and the
+	// children's update rows beyond the last column, sorted.
+	mark := make([]int, n)
+	for i := range mark {
+		mark[i] = -1
+	}
+	f.sptr = make([]int, ns+1)
+	f.srow = f.srow[:0]
+	for s := 0; s < ns; s++ {
+		c0, c1 := f.sfirst[s], f.sfirst[s+1]
+		start := len(f.srow)
+		for j := c0; j < c1; j++ {
+			f.srow = append(f.srow, j)
+			mark[j] = s
+		}
+		tail := len(f.srow)
+		for j := c0; j < c1; j++ {
+			for p := pat.cp[j]; p < pat.cp[j+1]; p++ {
+				if i := pat.ci[p]; mark[i] != s {
+					mark[i] = s
+					f.srow = append(f.srow, i)
 				}
-				f.lnz[i]++
-				f.flag[i] = k
+			}
+		}
+		for _, c := range f.child[f.cptr[s]:f.cptr[s+1]] {
+			cf := f.sfirst[c+1] - f.sfirst[c]
+			for _, i := range f.srow[f.sptr[c]+cf : f.sptr[c+1]] {
+				if mark[i] != s {
+					mark[i] = s
+					f.srow = append(f.srow, i)
+				}
+			}
+		}
+		sortInts(f.srow[tail:])
+		f.sptr[s+1] = len(f.srow)
+		_ = start
+	}
+
+	// Storage of L, relative indices, front offsets, workspace sizes.
+	f.lptr = make([]int, ns+1)
+	f.relptr = make([]int, ns+1)
+	f.fo = make([]int, len(pat.ci))
+	pos := make([]int, n)
+	f.frontMx = 0
+	maxWork := panelWidth * panelWidth
+	stackTop, stackMax := 0, 0
+	for s := 0; s < ns; s++ {
+		k := f.sfirst[s+1] - f.sfirst[s]
+		rows := f.srow[f.sptr[s]:f.sptr[s+1]]
+		m := len(rows)
+		f.lptr[s+1] = f.lptr[s] + m*k
+		f.frontMx = max(f.frontMx, m*m)
+		maxWork = max(maxWork, k*panelWidth, (m-k)*k)
+		for t, i := range rows {
+			pos[i] = t
+		}
+		for j := f.sfirst[s]; j < f.sfirst[s+1]; j++ {
+			for p := pat.cp[j]; p < pat.cp[j+1]; p++ {
+				f.fo[p] = pos[pat.ci[p]]*m + pos[j]
+			}
+		}
+		for _, c := range f.child[f.cptr[s]:f.cptr[s+1]] {
+			cf := f.sfirst[c+1] - f.sfirst[c]
+			u := f.sptr[c+1] - f.sptr[c] - cf
+			stackTop -= u * u
+		}
+		u := m - k
+		stackTop += u * u
+		stackMax = max(stackMax, stackTop)
+	}
+	// Relative indices of each supernode's update rows in its parent.
+	for s := 0; s < ns; s++ {
+		k := f.sfirst[s+1] - f.sfirst[s]
+		f.relptr[s+1] = f.relptr[s] + (f.sptr[s+1] - f.sptr[s] - k)
+	}
+	f.rel = make([]int, f.relptr[ns])
+	for s := 0; s < ns; s++ {
+		rows := f.srow[f.sptr[s]:f.sptr[s+1]]
+		for t, i := range rows {
+			pos[i] = t
+		}
+		for _, c := range f.child[f.cptr[s]:f.cptr[s+1]] {
+			cf := f.sfirst[c+1] - f.sfirst[c]
+			for t, i := range f.srow[f.sptr[c]+cf : f.sptr[c+1]] {
+				f.rel[f.relptr[c]+t] = pos[i]
 			}
 		}
 	}
-	f.lp = make([]int, n+1)
-	for k := 0; k < n; k++ {
-		f.lp[k+1] = f.lp[k] + f.lnz[k]
-	}
-	f.li = make([]int, f.lp[n])
-	f.lx = make([]float64, f.lp[n])
+	f.lx = make([]float64, f.lptr[ns])
 	f.d = make([]float64, n)
-	f.pattern = make([]int, n)
+	f.front = make([]float64, f.frontMx)
+	f.stack = make([]float64, stackMax)
+	f.work = make([]float64, maxWork)
 	f.y = make([]float64, n)
 	return nil
 }
 
-// NNZL returns the number of entries in L including its unit diagonal.
-func (f *Factor) NNZL() int { return len(f.li) + f.n }
+// NNZL returns the number of entries in L including its unit diagonal
+// (the exact count for the ordering, without supernodal padding).
+func (f *Factor) NNZL() int { return f.nnzl }
 
 // Perm returns the ordering: Perm()[k] is the original index of pivot k.
 func (f *Factor) Perm() []int { return f.perm }
 
 func (f *Factor) samePattern(a *Matrix) bool {
-	if a.n != f.n || len(a.rowIdx) != len(f.aRowIdx) {
-		return false
-	}
-	for i, v := range a.colPtr {
-		if f.aColPtr[i] != v {
-			return false
-		}
-	}
-	for i, v := range a.rowIdx {
-		if f.aRowIdx[i] != v {
-			return false
-		}
-	}
-	return true
+	return a.n == f.n && slices.Equal(a.colPtr, f.aColPtr) && slices.Equal(a.rowIdx, f.aRowIdx)
 }
 
 // Factorize computes the numeric factorisation of A. If A's pattern differs
 // from the analysed one (or Analyze was not called), it analyses A first
-// with default options. It returns a *PivotError naming the original column
-// whose pivot failed.
+// with the options of the last Analyze (defaults if none). It returns a
+// *PivotError naming the original column whose pivot failed.
 func (f *Factor) Factorize(a *Matrix) error {
 	if f.perm == nil || !f.samePattern(a) {
 		opt := f.opt
+		if opt.Coords != nil && len(opt.Coords) != a.n {
+			opt.Coords = nil
+		}
 		if err := f.Analyze(a, &opt); err != nil {
 			return err
 		}
 	}
 	f.ok = false
-	n := f.n
-	for i := range f.cx {
-		f.cx[i] = 0
-	}
 	for p, q := range f.cmap {
-		f.cx[q] += a.val[p]
+		f.cx[q] = a.val[p]
 	}
 	f.neg, f.pos = 0, 0
-	y, flag, pattern := f.y, f.flag, f.pattern
-	for k := 0; k < n; k++ {
-		y[k] = 0
-		top := n
-		flag[k] = k
-		f.lnz[k] = 0
-		diag := 0.0
-		for p := f.cp[k]; p < f.cp[k+1]; p++ {
-			i := f.ci[p]
-			y[i] += f.cx[p]
-			if i == k {
-				diag = f.cx[p]
-			}
-			l := 0
-			for ; flag[i] != k; i = f.parent[i] {
-				pattern[l] = i
-				l++
-				flag[i] = k
-			}
-			for l > 0 {
-				top--
-				l--
-				pattern[top] = pattern[l]
+	top := 0
+	for s := 0; s < f.ns; s++ {
+		c0, c1 := f.sfirst[s], f.sfirst[s+1]
+		k := c1 - c0
+		m := f.sptr[s+1] - f.sptr[s]
+		fr := f.front[:m*m]
+		for i := 0; i < m; i++ {
+			clear(fr[i*m : i*m+i+1])
+		}
+		// Assemble A's columns.
+		for p := f.cp[c0]; p < f.cp[c1]; p++ {
+			fr[f.fo[p]] += f.cx[p]
+		}
+		// Extend-add the children's update matrices (on top of the stack,
+		// last child on top).
+		ch := f.child[f.cptr[s]:f.cptr[s+1]]
+		for t := len(ch) - 1; t >= 0; t-- {
+			c := ch[t]
+			rel := f.rel[f.relptr[c]:f.relptr[c+1]]
+			u := len(rel)
+			top -= u * u
+			upd := f.stack[top : top+u*u]
+			for i, ri := range rel {
+				dst := fr[ri*m:]
+				src := upd[i*u : i*u+i+1]
+				for j, v := range src {
+					dst[rel[j]] += v
+				}
 			}
 		}
-		dk := y[k]
-		y[k] = 0
-		for ; top < n; top++ {
-			i := pattern[top]
-			yi := y[i]
-			y[i] = 0
-			p2 := f.lp[i] + f.lnz[i]
-			for p := f.lp[i]; p < p2; p++ {
-				y[f.li[p]] -= f.lx[p] * yi
-			}
-			lki := yi / f.d[i]
-			dk -= lki * yi
-			f.li[p2] = k
-			f.lx[p2] = lki
-			f.lnz[i]++
+		// Partial factorisation with the pivot test on original diagonals.
+		if err := partialLDLT(fr, m, k, f.d[c0:c1], f.work, f, c0); err != nil {
+			return err
 		}
-		f.d[k] = dk
-		tol := f.opt.PivotTol * math.Abs(diag)
-		switch {
-		case math.IsNaN(dk) || math.Abs(dk) <= tol || diag == 0:
-			return &PivotError{Col: f.perm[k], Pivot: dk, Diagonal: diag}
-		case dk < 0 && f.opt.Mode == Cholesky:
-			return &PivotError{Col: f.perm[k], Pivot: dk, Diagonal: diag, Negative: true}
-		case dk < 0:
-			f.neg++
-		default:
-			f.pos++
+		// Keep L's columns; push the update matrix.
+		lx := f.lx[f.lptr[s]:f.lptr[s+1]]
+		for i := 0; i < k; i++ {
+			copy(lx[i*k:i*k+i], fr[i*m:i*m+i])
+			clear(lx[i*k+i : (i+1)*k])
+		}
+		for i := k; i < m; i++ {
+			copy(lx[i*k:(i+1)*k], fr[i*m:i*m+k])
+		}
+		if u := m - k; u > 0 {
+			upd := f.stack[top : top+u*u]
+			for i := 0; i < u; i++ {
+				copy(upd[i*u:i*u+i+1], fr[(k+i)*m+k:(k+i)*m+k+i+1])
+			}
+			top += u * u
 		}
 	}
 	f.ok = true
+	return nil
+}
+
+// checkPivot applies the pivot test to pivot dj of column col (pivot
+// order) and counts its sign.
+func (f *Factor) checkPivot(col int, dj float64) error {
+	diag := 0.0
+	if q := f.cdiag[col]; q >= 0 {
+		diag = f.cx[q]
+	}
+	switch {
+	case math.IsNaN(dj) || math.Abs(dj) <= f.opt.PivotTol*math.Abs(diag) || diag == 0:
+		return &PivotError{Col: f.perm[col], Pivot: dj, Diagonal: diag}
+	case dj < 0 && f.opt.Mode == Cholesky:
+		return &PivotError{Col: f.perm[col], Pivot: dj, Diagonal: diag, Negative: true}
+	case dj < 0:
+		f.neg++
+	default:
+		f.pos++
+	}
 	return nil
 }
 
@@ -278,32 +423,69 @@ func (f *Factor) Solve(dst, b []float64) {
 	if !f.ok {
 		panic("sparse: Solve without a successful Factorize")
 	}
-	n := f.n
-	x := f.y[:n]
-	for k := 0; k < n; k++ {
-		x[k] = b[f.perm[k]]
+	x := f.y[:f.n]
+	for k, i := range f.perm {
+		x[k] = b[i]
 	}
-	for j := 0; j < n; j++ {
-		xj := x[j]
-		for p := f.lp[j]; p < f.lp[j+1]; p++ {
-			x[f.li[p]] -= f.lx[p] * xj
+	f.solvePermuted(x)
+	for k, i := range f.perm {
+		dst[i] = x[k]
+	}
+}
+
+// solvePermuted overwrites x with (L·D·Lᵀ)⁻¹·x, in pivot order.
+func (f *Factor) solvePermuted(x []float64) {
+	// Forward: L·y = b.
+	for s := 0; s < f.ns; s++ {
+		c0, c1 := f.sfirst[s], f.sfirst[s+1]
+		k := c1 - c0
+		rows := f.srow[f.sptr[s]:f.sptr[s+1]]
+		lx := f.lx[f.lptr[s]:f.lptr[s+1]]
+		xs := x[c0:c1]
+		for j := 1; j < k; j++ {
+			lj := lx[j*k : j*k+j]
+			t := xs[j]
+			for c, v := range lj {
+				t -= v * xs[c]
+			}
+			xs[j] = t
+		}
+		for i := k; i < len(rows); i++ {
+			li := lx[i*k : (i+1)*k]
+			t := 0.0
+			for c, v := range li {
+				t += v * xs[c]
+			}
+			x[rows[i]] -= t
 		}
 	}
-	for j := 0; j < n; j++ {
-		x[j] /= f.d[j]
+	for j, dj := range f.d {
+		x[j] /= dj
 	}
-	for j := n - 1; j >= 0; j-- {
-		s := x[j]
-		for p := f.lp[j]; p < f.lp[j+1]; p++ {
-			s -= f.lx[p] * x[f.li[p]]
+	// Backward: Lᵀ·x = y.
+	for s := f.ns - 1; s >= 0; s-- {
+		c0, c1 := f.sfirst[s], f.sfirst[s+1]
+		k := c1 - c0
+		rows := f.srow[f.sptr[s]:f.sptr[s+1]]
+		lx := f.lx[f.lptr[s]:f.lptr[s+1]]
+		xs := x[c0:c1]
+		for i := k; i < len(rows); i++ {
+			li := lx[i*k : (i+1)*k]
+			xi := x[rows[i]]
+			if xi == 0 {
+				continue
+			}
+			for c, v := range li {
+				xs[c] -= v * xi
+			}
 		}
-		x[j] = s
-	}
-	for k := 0; k < n; k++ {
-		dst[f.perm[k]] = x[k]
-	}
-	for k := range x {
-		x[k] = 0
+		for i := k - 1; i > 0; i-- {
+			li := lx[i*k : i*k+i]
+			xi := xs[i]
+			for c, v := range li {
+				xs[c] -= v * xi
+			}
+		}
 	}
 }
 

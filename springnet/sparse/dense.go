@@ -1,0 +1,140 @@
+package sparse
+
+import (
+	"gonum.org/v1/gonum/blas"
+	"gonum.org/v1/gonum/blas/blas64"
+)
+
+// Dense kernels on row-major blocks: element (i, j) of a block with
+// leading dimension ld is x[i*ld+j].
+
+// smallGemm is the flop count below which gemmNT uses plain loops rather
+// than the BLAS call (whose set-up costs more than the work).
+const smallGemm = 8 * 1024
+
+// gemmNT sets C -= A·Bᵀ for A (r×k, lda), B (c×k, ldb), C (r×c, ldc).
+func gemmNT(r, c, k int, a []float64, lda int, b []float64, ldb int, cc []float64, ldc int) {
+	if r == 0 || c == 0 || k == 0 {
+		return
+	}
+	if r*c*k < smallGemm {
+		for i := 0; i < r; i++ {
+			ai := a[i*lda : i*lda+k]
+			ci := cc[i*ldc : i*ldc+c]
+			for j := range ci {
+				bj := b[j*ldb : j*ldb+k]
+				s := 0.0
+				for t, v := range ai {
+					s += v * bj[t]
+				}
+				ci[j] -= s
+			}
+		}
+		return
+	}
+	blas64.Gemm(blas.NoTrans, blas.Trans, -1,
+		blas64.General{Rows: r, Cols: k, Stride: lda, Data: a[:(r-1)*lda+k]},
+		blas64.General{Rows: c, Cols: k, Stride: ldb, Data: b[:(c-1)*ldb+k]},
+		1, blas64.General{Rows: r, Cols: c, Stride: ldc, Data: cc[:(r-1)*ldc+c]})
+}
+
+// panelWidth is the number of pivots factorised together in partialLDLT.
+const panelWidth = 64
+
+// schurRows is the height of the row blocks of the Schur complement update.
+const schurRows = 256
+
+// partialLDLT eliminates the first k of the m rows/columns of the
+// symmetric front f (lower triangle, row-major, leading dimension m):
+// afterwards f[:, :k] holds the unit lower factor columns, d[:k] the
+// pivots, and the trailing (m−k)×(m−k) lower triangle the Schur
+// complement. w must hold at least max(panelWidth², k·panelWidth, (m−k)·k) values.
+// Each pivot j is checked by pc.checkPivot(c0+j, ·); an error stops the
+// factorisation.
+func partialLDLT(f []float64, m, k int, d, w []float64, pc *Factor, c0 int) error {
+	ld := m
+	for p0 := 0; p0 < k; p0 += panelWidth {
+		p1 := min(p0+panelWidth, k)
+		pb := p1 - p0
+		// Diagonal block of the panel, unblocked (right-looking inside).
+		for j := p0; j < p1; j++ {
+			dj := f[j*ld+j]
+			if err := pc.checkPivot(c0+j, dj); err != nil {
+				return err
+			}
+			d[j] = dj
+			inv := 1 / dj
+			for r := j + 1; r < p1; r++ {
+				rr := f[r*ld:]
+				lrj := rr[j] * inv
+				if lrj == 0 {
+					continue
+				}
+				for c := j + 1; c <= r; c++ {
+					rr[c] -= lrj * f[c*ld+j]
+				}
+			}
+			for r := j + 1; r < p1; r++ {
+				f[r*ld+j] *= inv
+			}
+		}
+		// W = L_panel-diag · D (pb×pb) for the row solves below.
+		wd := w[:pb*pb]
+		for j := p0; j < p1; j++ {
+			for c := p0; c < j; c++ {
+				wd[(j-p0)*pb+(c-p0)] = f[j*ld+c] * d[c]
+			}
+		}
+		// Rows below the panel's diagonal block: solve row·(L11 D)ᵀ = row.
+		for r := p1; r < m; r++ {
+			rr := f[r*ld+p0 : r*ld+p1]
+			for j := 0; j < pb; j++ {
+				s := rr[j]
+				wj := wd[j*pb : j*pb+j]
+				for c, v := range wj {
+					s -= rr[c] * v
+				}
+				rr[j] = s / d[p0+j]
+			}
+		}
+		if p1 == k {
+			break
+		}
+		// Update the remaining pivot columns [p1, k) of rows [p1, m):
+		// F[i, j] -= Σ_c L[i,c]·d_c·L[j,c]. W holds L[p1:k, panel]·D.
+		nk := k - p1
+		wp := w[:nk*pb]
+		for j := 0; j < nk; j++ {
+			src := f[(p1+j)*ld+p0 : (p1+j)*ld+p1]
+			dst := wp[j*pb : (j+1)*pb]
+			for c, v := range src {
+				dst[c] = v * d[p0+c]
+			}
+		}
+		for r0 := p1; r0 < k; r0 += schurRows {
+			r1 := min(r0+schurRows, k)
+			gemmNT(r1-r0, r1-p1, pb, f[r0*ld+p0:], ld, wp, pb, f[r0*ld+p1:], ld)
+		}
+		if m > k {
+			gemmNT(m-k, nk, pb, f[k*ld+p0:], ld, wp, pb, f[k*ld+p1:], ld)
+		}
+	}
+	// Schur complement: F22 -= L21·D·L21ᵀ (lower triangle, row blocks).
+	u := m - k
+	if u == 0 || k == 0 {
+		return nil
+	}
+	w2 := w[:u*k]
+	for i := 0; i < u; i++ {
+		src := f[(k+i)*ld : (k+i)*ld+k]
+		dst := w2[i*k : (i+1)*k]
+		for c, v := range src {
+			dst[c] = v * d[c]
+		}
+	}
+	for r0 := 0; r0 < u; r0 += schurRows {
+		r1 := min(r0+schurRows, u)
+		gemmNT(r1-r0, r1, k, f[(k+r0)*ld:], ld, w2, k, f[(k+r0)*ld+k:], ld)
+	}
+	return nil
+}
