@@ -275,6 +275,63 @@ func Catalogue() []Material {
 		add(m)
 	}
 
+	// Grouts: under base plates and in filled tubes.
+	gfg := 2000 * psi // TMS 602 minimum grout strength f'g, from memory
+	ge := Range{tmsLowFactor * 500 * gfg, 500 * gfg, tmsHighFactor * 500 * gfg}
+	cLoss, cLossSrc := concreteLoss()
+	add(Material{
+		Name:     "grout masonry",
+		Kind:     Concrete,
+		E:        ge,
+		Poisson:  concretePoisson,
+		Density:  2200,
+		Compress: gfg,
+		Loss:     cLoss,
+		Sources: []Source{
+			{"E", "TMS 402-16 4.2.2: E_g = 500 f'g, at f'g = 2000 psi (13.8 MPa), from memory"},
+			{"E range", "±25 %, trestle's choice as for masonry"},
+			{"Poisson", "ν = 0.2, common practice"},
+			{"density", "≈ 2200 kg/m³, common practice"},
+			{"compress", "f'g = 2000 psi minimum, TMS 602 / ASTM C476, from memory"},
+			cLossSrc,
+		},
+		Spread: "grout: water content, aggregate (fine or coarse grout), absorption by the units; 500 f'g is a low, code-conservative modulus",
+	})
+	add(Material{
+		Name:     "grout cementitious non-shrink",
+		Kind:     Concrete,
+		E:        Range{20 * gpa, 27 * gpa, 32 * gpa},
+		Poisson:  concretePoisson,
+		Density:  2250,
+		Compress: 5000 * psi,
+		Loss:     cLoss,
+		Sources: []Source{
+			{"E", "non-shrink cementitious machinery grouts, makers' data 20–32 GPa, from memory"},
+			{"Poisson", "ν = 0.2, common practice"},
+			{"density", "≈ 2200–2300 kg/m³, makers' data, from memory"},
+			{"compress", "ASTM C1107: 5000 psi (34.5 MPa) at 28 days minimum, from memory"},
+			cLossSrc,
+		},
+		Spread: "grout: product, water added (flowable vs. fluid consistency), curing; E rises with strength",
+	})
+	add(Material{
+		Name:     "grout epoxy",
+		Kind:     MineralCasting,
+		E:        Range{8 * gpa, 12 * gpa, 16 * gpa},
+		Poisson:  0.3,
+		Density:  2050,
+		Compress: 90 * mpa,
+		Loss:     Range{0.01, 0.03, 0.06},
+		Sources: []Source{
+			{"E", "epoxy machinery grouts, compressive modulus ≈ 1.2–2.3e6 psi (8–16 GPa), makers' data, from memory"},
+			{"Poisson", "≈ 0.3, from memory"},
+			{"density", "≈ 2000–2100 kg/m³, makers' data, from memory"},
+			{"compress", "≈ 90 MPa (13 000 psi) at 7 days, makers' data, from memory"},
+			{"loss", "filled epoxy, from memory; rises with temperature"},
+		},
+		Spread: "epoxy grout: filler content, temperature (creep and softening above ~40 °C), product",
+	})
+
 	add(Material{
 		Name:     "epoxy granite",
 		Kind:     MineralCasting,

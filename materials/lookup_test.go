@@ -92,6 +92,11 @@ func TestLookupAmbiguousAndEmpty(t *testing.T) {
 	assert.Contains(t, err.Error(), `"concrete C20/25"`)
 	assert.Contains(t, err.Error(), `"concrete C40/50"`)
 
+	// "grout" alone fits three products; the error lists them.
+	_, err = Lookup("grout")
+	require.Error(t, err)
+	assert.Contains(t, err.Error(), `"grout epoxy"`)
+
 	_, err = Lookup("timber oak")
 	require.Error(t, err)
 	assert.Contains(t, err.Error(), `"timber white oak"`)
