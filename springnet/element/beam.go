@@ -41,6 +41,10 @@ const (
 // between the node and the beam end, for a bolted or partly rigid joint; zero
 // means a rigid joint. A release overrides a spring about the same axis.
 //
+// A joint spring far stiffer than the beam end it feeds (k above about
+// 1e8·EI/L) loses digits in the condensation, k − k²/(k + k_beam); give 0
+// for a rigid joint instead.
+//
 // The zero BeamProps is a beam with no stiffness; see Validate.
 type BeamProps struct {
 	EA   float64 // axial stiffness E·A [N]
@@ -117,10 +121,7 @@ func BeamLocalStiffness(p BeamProps, l float64) Mat12 {
 // bendingBlock writes one bending plane into k at translations ta, tb and
 // rotations ra, rb; sign is +1 for the x–y plane and −1 for the x–z plane.
 func bendingBlock(k *Mat12, ta, ra, tb, rb int, ei, gas, l, sign float64) {
-	phi := 0.0
-	if gas > 0 {
-		phi = 12 * ei / (gas * l * l)
-	}
+	phi := shearPhi(ei, gas, l)
 	c := ei / ((1 + phi) * l * l * l)
 	t := 12 * c
 	tr := sign * 6 * l * c

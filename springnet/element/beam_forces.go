@@ -101,34 +101,58 @@ func beamEndDisp(f Frame, p BeamProps, ua, ub Vec6) Vec12 {
 //
 //	x_i = a + s_i·L·Ex + mag·Rᵀ·(u(s_i), v(s_i), w(s_i)),  s_i = i/(n−1)
 //
-// where u is linear between the end axial displacements and v, w are the
-// Hermite cubics through the end translations and the beam's end rotations
-// (θz = dv/dx, θy = −dw/dx), after releases and end springs. mag
-// magnifies the displacements for drawing (1 for true size). For a
-// Timoshenko beam the cubic is an approximation, fine for drawings. n < 2
-// is taken as 2.
+// where u is linear between the end axial displacements and v, w interpolate
+// the end translations and the beam's own end rotations (after releases and
+// end springs; θz = dv/dx, θy = −dw/dx at an Euler–Bernoulli end). For the
+// Euler–Bernoulli beam these are the Hermite cubics; with shear stiffness
+// given they are the cubics of the Timoshenko beam under end loads, which
+// add Φ·(shear) terms,
+//
+//	v(s) = [ (1 − 3s² + 2s³ + Φ(1 − s))·v_a + L(s − 2s² + s³ + Φ(s − s²)/2)·θ_a
+//	       + (3s² − 2s³ + Φs)·v_b + L(s³ − s² − Φ(s − s²)/2)·θ_b ] / (1 + Φ)
+//
+// (Przemieniecki, beam element with shear deformation; Cook et al.,
+// Timoshenko beam), so the shape is exact for a member without span load.
+// mag magnifies the displacements for drawing (1 for true size). n < 2 is
+// taken as 2.
 func DeflectedShape(dst []Vec3, f Frame, p BeamProps, ua, ub Vec6, n int, mag float64) []Vec3 {
 	if n < 2 {
 		n = 2
 	}
 	u := beamEndDisp(f, p, ua, ub)
 	l := f.L
+	phiY, phiZ := shearPhi(p.EIz, p.GAsY, l), shearPhi(p.EIy, p.GAsZ, l)
 	for i := range n {
 		s := float64(i) / float64(n-1)
-		n1 := 1 - 3*s*s + 2*s*s*s
-		n2 := l * (s - 2*s*s + s*s*s)
-		n3 := 3*s*s - 2*s*s*s
-		n4 := l * (s*s*s - s*s)
 		loc := Vec3{
 			(1-s)*u[0] + s*u[6],
-			n1*u[1] + n2*u[5] + n3*u[7] + n4*u[11],
-			n1*u[2] - n2*u[4] + n3*u[8] - n4*u[10],
+			cubic(s, l, phiY, u[1], u[5], u[7], u[11]),
+			cubic(s, l, phiZ, u[2], -u[4], u[8], -u[10]),
 		}
 		g := f.ToGlobal(loc)
 		pt := add(f.A, scale(f.Ex, s*l))
 		dst = append(dst, add(pt, scale(g, mag)))
 	}
 	return dst
+}
+
+// shearPhi returns Φ = 12·EI/(κGA·L²), 0 when gas is 0 (rigid in shear).
+func shearPhi(ei, gas, l float64) float64 {
+	if gas > 0 {
+		return 12 * ei / (gas * l * l)
+	}
+	return 0
+}
+
+// cubic returns the transverse displacement at s of a beam with end
+// translations va, vb and end rotations ta, tb (as dv/dx-type slopes).
+func cubic(s, l, phi, va, ta, vb, tb float64) float64 {
+	s2, s3 := s*s, s*s*s
+	h := phi * (s - s2) / 2
+	return ((1-3*s2+2*s3+phi*(1-s))*va +
+		l*(s-2*s2+s3+h)*ta +
+		(3*s2-2*s3+phi*s)*vb +
+		l*(s3-s2-h)*tb) / (1 + phi)
 }
 
 // CombinedStress returns the largest absolute normal stress at the extreme

@@ -358,3 +358,26 @@ func TestBeamPropsValidate(t *testing.T) {
 		})
 	}
 }
+
+// TestDeflectedShapeTimoshenko: a shear-flexible cantilever under tip load
+// deflects v(x) = P·x²(3L − x)/(6EI) + P·x/(κGA) (bending plus constant shear
+// strain P/κGA; Timoshenko and Gere, Mechanics of Materials, shear
+// deflection of a cantilever).
+func TestDeflectedShapeTimoshenko(t *testing.T) {
+	const l, p, n = 1.6, 2e3, 9
+	props := demo
+	props.GAsY, props.GAsZ = 4e6, 2.5e6
+	s, f := cantilever(t, l, props)
+	s.f[7], s.f[8] = p, p
+	u := s.solve(t)
+	var ua, ub element.Vec6
+	copy(ub[:], u[6:12])
+	pts := element.DeflectedShape(nil, f, props, ua, ub, n, 1)
+	require.Len(t, pts, n)
+	for i, pt := range pts {
+		x := l * float64(i) / (n - 1)
+		vy := p*x*x*(3*l-x)/(6*props.EIz) + p*x/props.GAsY
+		vz := p*x*x*(3*l-x)/(6*props.EIy) + p*x/props.GAsZ
+		assertVec(t, element.Vec3{x, vy, vz}, pt, 1e-9*vy, fmt.Sprintf("point %d", i))
+	}
+}
