@@ -1,0 +1,623 @@
+package ringdown
+
+import (
+	"fmt"
+	"math"
+	"slices"
+)
+
+// Settings tune Reduce. The zero value (or a nil *Settings) reduces the
+// dominant mode of the whole record with an automatic fit window.
+type Settings struct {
+	// Band isolates one mode with a zero-phase band-pass [Hz] before the
+	// envelope and the fits; the mode is looked for inside it. Zero: none.
+	Band Band
+	// Centre, when Band is zero, isolates the mode nearest this frequency
+	// [Hz] with the band Centre·(1 ± Width). Zero: none.
+	Centre float64
+	// Width is the half-width of the band around Centre as a fraction of it.
+	// Zero: 0.2.
+	Width float64
+	// Search is where the dominant mode is looked for when no band is given
+	// [Hz]. Zero: from three cycles per record length up to 0.45 × the
+	// sample rate.
+	Search Band
+	// Window fixes the fit window [s, record time]. Zero: automatic, from
+	// after the strike and any clipped peaks to where the envelope meets
+	// NoiseFactor × the noise floor.
+	Window Band
+	// NoiseFactor: the automatic fit window ends where the smoothed
+	// envelope falls below NoiseFactor × the noise floor. Zero: 3.
+	NoiseFactor float64
+	// Disagree: methods disagree when the largest damping ratio among them
+	// exceeds the smallest by more than this factor. Zero: 1.3.
+	Disagree float64
+}
+
+// Defaults for Settings and limits of the reduction.
+const (
+	defaultWidth       = 0.2
+	defaultNoiseFactor = 3
+	// defaultDisagree: damping ratios from different methods on one good
+	// record usually agree within 10–20 % (common practice); 30 % is
+	// taken as disagreement.
+	defaultDisagree = 1.3
+	// maxFitPoints caps the samples used by the time-domain fits; longer
+	// windows are strided, keeping at least minFitPerCycle samples a cycle.
+	maxFitPoints   = 100_000
+	minFitPerCycle = 8
+	// fewCycles: fewer cycles than this in the fit window earn a warning.
+	fewCycles = 5
+	// fewSamples: fewer samples per cycle than this earn a warning.
+	fewSamples = 8
+	// floorTail: the noise floor is measured over this last fraction of
+	// the record.
+	floorTail = 0.1
+	// secondPeakLevel: another spectral peak above this fraction of the
+	// dominant one (−10 dB) earns a warning when no band is given.
+	secondPeakLevel = 0.316
+)
+
+// Method names in Result.Methods, in this order.
+const (
+	MethodPeaks     = "peaks"      // log of interpolated peak amplitudes, linear fit
+	MethodHilbert   = "hilbert"    // log of the analytic-signal envelope, linear fit
+	MethodSineFit   = "sine fit"   // damped sinusoid, nonlinear least squares
+	MethodHalfPower = "half-power" // half-power bandwidth of the windowed spectrum
+)
+
+// config is Settings with defaults filled in and checked.
+type config struct {
+	Settings
+	band Band // isolation band actually used; zero: none
+}
+
+func (s *Settings) config(rate float64, dur float64) (config, error) {
+	var c config
+	if s != nil {
+		c.Settings = *s
+	}
+	for _, v := range []float64{c.Band.Low, c.Band.High, c.Centre, c.Width, c.Search.Low, c.Search.High,
+		c.Window.Low, c.Window.High, c.NoiseFactor, c.Disagree} {
+		if bad(v) {
+			return c, fmt.Errorf("ringdown: settings hold a value that is not finite (%g)", v)
+		}
+	}
+	nyq := rate / 2
+	if c.Width == 0 {
+		c.Width = defaultWidth
+	}
+	if c.NoiseFactor == 0 {
+		c.NoiseFactor = defaultNoiseFactor
+	}
+	if c.Disagree == 0 {
+		c.Disagree = defaultDisagree
+	}
+	switch {
+	case c.Width <= 0 || c.Width >= 1:
+		return c, fmt.Errorf("ringdown: band width %g is not in (0, 1)", c.Width)
+	case c.NoiseFactor < 1:
+		return c, fmt.Errorf("ringdown: noise factor %g is below 1", c.NoiseFactor)
+	case c.Disagree <= 1:
+		return c, fmt.Errorf("ringdown: disagreement factor %g is not above 1", c.Disagree)
+	case c.Centre < 0 || c.Centre >= nyq:
+		return c, fmt.Errorf("ringdown: centre frequency %g Hz is not in (0, %g) Hz (half the sample rate)", c.Centre, nyq)
+	}
+	c.band = c.Band
+	if c.band.IsZero() && c.Centre > 0 {
+		c.band = Band{c.Centre * (1 - c.Width), c.Centre * (1 + c.Width)}
+	}
+	if !c.band.IsZero() {
+		if !(c.band.Low >= 0 && c.band.Low < c.band.High && c.band.High <= nyq) {
+			return c, fmt.Errorf("ringdown: band %g–%g Hz is not an interval within 0–%g Hz (half the sample rate)", c.band.Low, c.band.High, nyq)
+		}
+	}
+	if !c.Search.IsZero() && !(c.Search.Low >= 0 && c.Search.Low < c.Search.High) {
+		return c, fmt.Errorf("ringdown: search band %g–%g Hz is not an interval", c.Search.Low, c.Search.High)
+	}
+	if !c.Window.IsZero() && !(c.Window.Low < c.Window.High) {
+		return c, fmt.Errorf("ringdown: fit window %g–%g s is not an interval", c.Window.Low, c.Window.High)
+	}
+	return c, nil
+}
+
+// Reduce finds the dominant mode of rec (or the mode inside the band given
+// in s) and measures its frequency and damping by four methods: peak
+// amplitudes, the analytic-signal envelope, a damped-sinusoid fit and the
+// half-power bandwidth. The sine fit gives the nominal values; the spread of
+// the others enters the uncertainty. A nil s means the default Settings.
+//
+// Reduce fails if the record or settings are unusable, no spectral peak is
+// found, or the ring-down stays above the noise floor for less than two
+// cycles; problems short of failure are listed in Result.Warnings.
+func Reduce(rec Record, s *Settings) (Result, error) {
+	if err := rec.Check(); err != nil {
+		return Result{}, err
+	}
+	cfg, err := s.config(rec.Rate, rec.Duration())
+	if err != nil {
+		return Result{}, err
+	}
+	r := reduction{rec: rec, cfg: cfg, fs: rec.Rate}
+	r.warn = slices.Clone(rec.Notes)
+	return r.run()
+}
+
+// reduction carries one Reduce through its steps.
+type reduction struct {
+	rec  Record
+	cfg  config
+	fs   float64
+	warn []string
+
+	x       []float64  // detrended record
+	y, h    []float64  // isolated signal and its Hilbert transform
+	env     []float64  // analytic-signal envelope |y + i h|
+	f0      float64    // spectral peak frequency [Hz]
+	over    spectrum   // overview spectrum (from the strike on)
+	strike  int        // index of the largest |x|
+	clipped int        // number of clipped samples
+	clipEnd int        // last clipped sample, −1 if none
+	win     [2]int     // fit window, sample indices inclusive
+	floorOK bool       // the envelope reached the noise floor
+	floor   float64    // noise floor of the envelope
+	halfPts [2]float64 // half-power frequencies [Hz], zero if not found
+}
+
+func (r *reduction) addWarn(format string, a ...any) {
+	r.warn = append(r.warn, fmt.Sprintf(format, a...))
+}
+
+func (r *reduction) run() (Result, error) {
+	n := len(r.rec.Samples)
+	r.x = detrend(r.rec.Samples)
+	r.strike = 0
+	for i, v := range r.x {
+		if math.Abs(v) > math.Abs(r.x[r.strike]) {
+			r.strike = i
+		}
+	}
+	if r.x[r.strike] == 0 {
+		return Result{}, fmt.Errorf("ringdown: the record is constant (after removing the mean and trend)")
+	}
+	r.clipped, r.clipEnd = detectClipping(r.rec.Samples)
+	if err := r.findMode(); err != nil {
+		return Result{}, err
+	}
+	r.y, r.h = analytic(r.x, r.fs, r.cfg.band)
+	r.env = make([]float64, n)
+	for i := range r.env {
+		r.env[i] = math.Hypot(r.y[i], r.h[i])
+	}
+	if err := r.chooseWindow(); err != nil {
+		return Result{}, err
+	}
+	ms := make([]MethodEstimate, 0, 4)
+	pk := r.peaksMethod()
+	hb, hfit := r.hilbertMethod()
+	sf, sfit := r.sineMethod(hb, hfit)
+	hp := r.halfPowerMethod(hfit)
+	ms = append(ms, pk, hb, sf, hp)
+	return r.combine(ms, sfit, hfit)
+}
+
+// detrend returns x less its least-squares straight line (gravity, DC and
+// slow drift).
+func detrend(x []float64) []float64 {
+	n := len(x)
+	t := make([]float64, n)
+	for i := range t {
+		t[i] = float64(i)
+	}
+	out := make([]float64, n)
+	f, ok := fitLine(t, x, nil)
+	if !ok {
+		copy(out, x)
+		return out
+	}
+	for i := range out {
+		out[i] = x[i] - f.a - f.b*t[i]
+	}
+	return out
+}
+
+// detectClipping counts samples sitting on the record's extreme values when
+// at least three samples (or two in a row) share an extreme: a sensor or
+// logger at its range limit. It returns the count and the last such index
+// (−1 if none).
+func detectClipping(x []float64) (count, last int) {
+	lo, hi := x[0], x[0]
+	for _, v := range x {
+		lo, hi = min(lo, v), max(hi, v)
+	}
+	if hi == lo {
+		return 0, -1
+	}
+	tol := 1e-9 * (hi - lo)
+	last = -1
+	for _, rail := range []float64{hi, lo} {
+		c, l, run, pair := 0, -1, 0, false
+		for i, v := range x {
+			if math.Abs(v-rail) <= tol {
+				c++
+				l = i
+				run++
+				if run >= 2 {
+					pair = true
+				}
+			} else {
+				run = 0
+			}
+		}
+		if c >= 3 || pair {
+			count += c
+			last = max(last, l)
+		}
+	}
+	return count, last
+}
+
+// findMode computes the overview spectrum from the strike on (a half-cosine
+// taper over its last tenth) and locates the dominant peak.
+func (r *reduction) findMode() error {
+	seg := slices.Clone(r.x[r.strike:])
+	if len(seg) < MinSamples {
+		seg = slices.Clone(r.x)
+	}
+	m := len(seg)
+	nt := max(m/10, 1)
+	for i := m - nt; i < m; i++ {
+		u := float64(i-(m-nt)) / float64(nt)
+		seg[i] *= 0.5 * (1 + math.Cos(math.Pi*u))
+	}
+	r.over = amplitudeSpectrum(seg, 1<<16, r.fs)
+	lo, hi := r.searchBand(m)
+	klo := int(math.Ceil(lo / r.over.df))
+	khi := int(math.Floor(hi / r.over.df))
+	k, frac := r.over.peak(klo, khi)
+	if k < 0 || r.over.mag[k] == 0 {
+		return fmt.Errorf("ringdown: no spectral peak between %.4g and %.4g Hz", lo, hi)
+	}
+	r.f0 = r.over.freq(frac)
+	if r.cfg.band.IsZero() {
+		r.checkSecondPeak(k, klo, khi)
+	}
+	return nil
+}
+
+// searchBand returns where the dominant mode is looked for [Hz].
+func (r *reduction) searchBand(m int) (lo, hi float64) {
+	if !r.cfg.band.IsZero() {
+		return r.cfg.band.Low, r.cfg.band.High
+	}
+	lo, hi = 3*r.fs/float64(m), 0.45*r.fs
+	if !r.cfg.Search.IsZero() {
+		lo, hi = max(lo, r.cfg.Search.Low), min(hi, r.cfg.Search.High)
+	}
+	return lo, hi
+}
+
+// checkSecondPeak warns when another local maximum of the spectrum, away
+// from the dominant peak, comes within 10 dB of it.
+func (r *reduction) checkSecondPeak(k, klo, khi int) {
+	mag := r.over.mag
+	away := max(3, int(0.1*float64(k)))
+	limit := secondPeakLevel * mag[k]
+	best, bk := 0.0, -1
+	for i := max(klo, 1); i <= min(khi, len(mag)-2); i++ {
+		if abs(i-k) <= away || mag[i] < limit || mag[i] < mag[i-1] || mag[i] < mag[i+1] {
+			continue
+		}
+		// A shoulder of the dominant peak is no second mode: require a dip
+		// below the limit between them.
+		a, b := min(i, k), max(i, k)
+		dip := slices.Min(mag[a : b+1])
+		if dip >= 0.7*mag[i] {
+			continue
+		}
+		if mag[i] > best {
+			best, bk = mag[i], i
+		}
+	}
+	if bk >= 0 {
+		r.addWarn("another spectral peak at %.4g Hz is within %.0f dB of the mode at %.4g Hz; give a band or centre frequency to reduce the modes one at a time",
+			r.over.freq(float64(bk)), -20*math.Log10(best/mag[k]), r.f0)
+	}
+}
+
+func abs(i int) int {
+	if i < 0 {
+		return -i
+	}
+	return i
+}
+
+// period returns the samples per cycle of the dominant mode.
+func (r *reduction) period() float64 { return r.fs / r.f0 }
+
+// chooseWindow sets the fit window.
+func (r *reduction) chooseWindow() error {
+	n := len(r.x)
+	p := r.period()
+	pi := max(1, int(math.Round(p)))
+	// Smoothed envelope: moving average over one period.
+	es := movingAverage(r.env, pi)
+	// Noise floor from the record's last tenth; the floor is reached when
+	// the envelope no longer falls across that tail.
+	tail := max(int(floorTail*float64(n)), 4*pi)
+	tail = min(tail, n/2)
+	t0 := n - tail
+	r.floor = median(es[t0:])
+	a := median(es[t0 : t0+tail/2])
+	b := median(es[t0+tail/2:])
+	r.floorOK = b > 0 && a/b < 1.5
+	edge := int(math.Ceil(2 * p))
+	settle := int(math.Ceil(r.cfg.band.settle() * r.fs))
+	if !r.cfg.Window.IsZero() {
+		s := int(math.Ceil((r.cfg.Window.Low - r.rec.Start) * r.fs))
+		e := int(math.Floor((r.cfg.Window.High - r.rec.Start) * r.fs))
+		s, e = max(s, 0), min(e, n-1)
+		if e-s < int(2*p) {
+			return fmt.Errorf("ringdown: fit window %.4g–%.4g s holds fewer than two cycles of the %.4g Hz mode inside the record (%.4g–%.4g s)",
+				r.cfg.Window.Low, r.cfg.Window.High, r.f0, r.rec.Start, r.rec.Time(n-1))
+		}
+		r.win = [2]int{s, e}
+		return nil
+	}
+	peak := 0
+	for i := range es {
+		if es[i] > es[peak] {
+			peak = i
+		}
+	}
+	start := max(peak+pi, edge, r.strike+settle)
+	if r.clipEnd >= 0 {
+		start = max(start, r.clipEnd+pi)
+		r.addWarn("%d clipped samples (sensor or logger at its range limit): the fit starts after the last one, at %.4g s", r.clipped, r.rec.Time(r.clipEnd))
+	}
+	end := n - 1 - max(edge, settle)
+	if r.floorOK {
+		thr := r.cfg.NoiseFactor * r.floor
+		for i := start; i <= end; i++ {
+			if es[i] < thr {
+				end = i
+				break
+			}
+		}
+	}
+	if end-start < int(2*p) {
+		return fmt.Errorf("ringdown: the %.4g Hz ring-down stays clear of the noise floor (and of clipping) for fewer than two cycles", r.f0)
+	}
+	r.win = [2]int{start, end}
+	return nil
+}
+
+// movingAverage returns the centred running mean of x over w samples.
+func movingAverage(x []float64, w int) []float64 {
+	n := len(x)
+	out := make([]float64, n)
+	if w <= 1 {
+		copy(out, x)
+		return out
+	}
+	pre := make([]float64, n+1)
+	for i, v := range x {
+		pre[i+1] = pre[i] + v
+	}
+	h := w / 2
+	for i := range out {
+		a, b := max(0, i-h), min(n, i-h+w)
+		out[i] = (pre[b] - pre[a]) / float64(b-a)
+	}
+	return out
+}
+
+// stride returns the step through the window that keeps at most
+// maxFitPoints samples and at least minFitPerCycle per cycle.
+func (r *reduction) stride() int {
+	m := r.win[1] - r.win[0] + 1
+	s := max(1, m/maxFitPoints)
+	s = min(s, max(1, int(r.period()/minFitPerCycle)))
+	return s
+}
+
+// unwrappedPhase returns the unwrapped phase of y + i h over the window.
+func (r *reduction) unwrappedPhase() []float64 {
+	a, b := r.win[0], r.win[1]
+	ph := make([]float64, b-a+1)
+	prev := 0.0
+	for i := a; i <= b; i++ {
+		v := math.Atan2(r.h[i], r.y[i])
+		if i > a {
+			d := v - prev
+			d -= 2 * math.Pi * math.Round(d/(2*math.Pi))
+			ph[i-a] = ph[i-a-1] + d
+		} else {
+			ph[0] = v
+		}
+		prev = v
+	}
+	return ph
+}
+
+// hilbertMethod fits the logarithm of the envelope (weights env², the
+// inverse variance of ln env for additive noise) and the unwrapped phase
+// against time over the window.
+func (r *reduction) hilbertMethod() (MethodEstimate, hilbertFit) {
+	me := MethodEstimate{Method: MethodHilbert}
+	a, b := r.win[0], r.win[1]
+	st := r.stride()
+	ph := r.unwrappedPhase()
+	var t, le, w, p []float64
+	for i := a; i <= b; i += st {
+		if r.env[i] <= 0 {
+			continue
+		}
+		t = append(t, float64(i-a)/r.fs)
+		le = append(le, math.Log(r.env[i]))
+		w = append(w, r.env[i]*r.env[i])
+		p = append(p, ph[i-a])
+	}
+	ef, ok1 := fitLine(t, le, w)
+	pf, ok2 := fitLine(t, p, w)
+	if !ok1 || !ok2 || !(pf.b > 0) {
+		me.Note = "envelope or phase fit failed"
+		return me, hilbertFit{}
+	}
+	me.set(-ef.b, ef.sb, pf.b, pf.sb, r.cycles(pf.b))
+	me.Note = fmt.Sprintf("%d samples", len(t))
+	return me, hilbertFit{env: ef, phase: pf}
+}
+
+// hilbertFit holds the two line fits of the Hilbert method: ln envelope
+// and unwrapped phase against time from the window start.
+type hilbertFit struct{ env, phase lineFit }
+
+// cycles returns the cycles in the window at angular frequency om.
+func (r *reduction) cycles(om float64) float64 {
+	return float64(r.win[1]-r.win[0]) / r.fs * om / (2 * math.Pi)
+}
+
+// peaksMethod reads the extrema of the signal where the analytic phase
+// crosses multiples of π, refines each with the three-point sinusoid
+// interpolation, and fits the logarithm of their amplitudes (weights A²)
+// and their times against their index.
+func (r *reduction) peaksMethod() MethodEstimate {
+	me := MethodEstimate{Method: MethodPeaks}
+	a, b := r.win[0], r.win[1]
+	ph := r.unwrappedPhase()
+	w := 2 * math.Pi * r.f0 / r.fs // radians per sample
+	sw := math.Sin(w)
+	var tk, lk, wk, idx []float64
+	m0 := math.Ceil(ph[0] / math.Pi)
+	j := 0
+	for m := m0; ; m++ {
+		target := m * math.Pi
+		for j < len(ph) && ph[j] < target {
+			j++
+		}
+		if j >= len(ph) {
+			break
+		}
+		// The extremum is the largest |y| near the crossing.
+		k := a + j
+		for _, c := range []int{a + j - 1, a + j + 1} {
+			if c > 0 && c < len(r.y)-1 && math.Abs(r.y[c]) > math.Abs(r.y[k]) {
+				k = c
+			}
+		}
+		if k <= 0 || k >= len(r.y)-1 || k < a || k > b {
+			continue
+		}
+		y0, ym, yp := r.y[k], r.y[k-1], r.y[k+1]
+		if y0 < 0 {
+			y0, ym, yp = -y0, -ym, -yp
+		}
+		if math.Abs(y0) < math.Abs(ym) || math.Abs(y0) < math.Abs(yp) || sw < 1e-6 {
+			continue
+		}
+		// y(n) = A cos(θ + n·w): A cos θ = y0, A sin θ = (y₋₁ − y₊₁)/(2 sin w).
+		s := (ym - yp) / (2 * sw)
+		amp := math.Hypot(y0, s)
+		off := -math.Atan2(s, y0) / w
+		if amp <= 0 || math.Abs(off) > 1 {
+			continue
+		}
+		tk = append(tk, (float64(k-a)+off)/r.fs)
+		lk = append(lk, math.Log(amp))
+		wk = append(wk, amp*amp)
+		idx = append(idx, m)
+	}
+	if len(tk) < 4 {
+		me.Note = fmt.Sprintf("only %d peaks in the window", len(tk))
+		return me
+	}
+	af, ok1 := fitLine(tk, lk, wk)
+	tf, ok2 := fitLine(idx, tk, nil) // time per half cycle
+	if !ok1 || !ok2 || !(tf.b > 0) {
+		me.Note = "peak fit failed"
+		return me
+	}
+	om := math.Pi / tf.b
+	som := math.Pi / (tf.b * tf.b) * tf.sb
+	me.set(-af.b, af.sb, om, som, float64(len(tk)-1)/2)
+	me.Note = fmt.Sprintf("%d peaks and troughs", len(tk))
+	return me
+}
+
+// sineMethod fits the damped sinusoid to the window, starting from the
+// Hilbert estimates.
+func (r *reduction) sineMethod(hb MethodEstimate, hf hilbertFit) (MethodEstimate, sineFit) {
+	me := MethodEstimate{Method: MethodSineFit}
+	if !hb.OK {
+		me.Note = "no start values (the envelope fit failed)"
+		return me, sineFit{}
+	}
+	a, b := r.win[0], r.win[1]
+	st := r.stride()
+	var t, y []float64
+	for i := a; i <= b; i += st {
+		t = append(t, float64(i-a)/r.fs)
+		y = append(y, r.y[i])
+	}
+	amp := math.Exp(hf.env.a)
+	phi0, om := hf.phase.a, hf.phase.b
+	// y ≈ A e^(−σt) cos(ωt + φ₀) = e^(−σt)(−A sin φ₀ · sin ωt + A cos φ₀ · cos ωt).
+	p0 := [np]float64{-amp * math.Sin(phi0), amp * math.Cos(phi0), -hf.env.b, om, 0, 0}
+	f, ok := fitDampedSine(t, y, p0)
+	if !ok || !(f.p[2] > 0) || !(f.p[3] > 0) || math.Abs(f.p[3]-om) > 0.1*om {
+		me.Note = "the nonlinear fit did not converge to a decaying sinusoid"
+		return me, sineFit{}
+	}
+	me.set(f.p[2], math.Sqrt(f.cov[2][2]), f.p[3], math.Sqrt(f.cov[3][3]), r.cycles(f.p[3]))
+	me.Note = fmt.Sprintf("%d iterations, residual %.3g of amplitude", f.iters, f.resid/f.amplitude())
+	return me, f
+}
+
+// halfPowerMethod measures the half-power bandwidth of the rectangular-
+// windowed spectrum of the fit window, zero-padded so the bandwidth spans
+// at least about 20 bins. For the free decay e^(−σt) sin(ω_d t) the
+// spectrum near ω_d is |1/(σ + i(ω−ω_d))|², whose half-power points are
+// ω_d ± σ (Inman, Engineering Vibration, §2.2 for the half-power method);
+// so σ = Δω/2 and ζ = σ/√(ω_d² + σ²). Its uncertainty is the change when
+// the window is shortened by a quarter.
+func (r *reduction) halfPowerMethod(hf hilbertFit) MethodEstimate {
+	me := MethodEstimate{Method: MethodHalfPower}
+	a, b := r.win[0], r.win[1]
+	sigEst := -hf.env.b
+	if !(sigEst > 0) {
+		sigEst = 2 * math.Pi * r.f0 * 0.01
+	}
+	measure := func(seg []float64) (sig, om, lo, hi float64, ok bool) {
+		df := sigEst / math.Pi / 20
+		nfft := max(4*len(seg), int(math.Min(r.fs/df, 1<<22)))
+		sp := amplitudeSpectrum(seg, nfft, r.fs)
+		c := r.f0 / sp.df
+		k, frac := sp.peak(int(0.8*c), int(1.2*c)+1)
+		if k < 0 {
+			return 0, 0, 0, 0, false
+		}
+		lo, hi, ok = sp.halfPower(k)
+		if !ok {
+			return 0, 0, 0, 0, false
+		}
+		return math.Pi * (hi - lo), 2 * math.Pi * sp.freq(frac), lo, hi, true
+	}
+	seg := r.y[a : b+1]
+	sig, om, lo, hi, ok := measure(seg)
+	if !ok {
+		me.Note = "no half-power points around the peak"
+		return me
+	}
+	r.halfPts = [2]float64{lo, hi}
+	sig2, om2, _, _, ok2 := measure(seg[:len(seg)*3/4])
+	if !ok2 {
+		sig2, om2 = sig, om
+	}
+	me.set(sig, math.Abs(sig2-sig), om, math.Abs(om2-om), r.cycles(om))
+	if rEnd := math.Exp(-sig * float64(b-a) / r.fs); rEnd > 0.2 {
+		me.OK = false
+		me.Note = fmt.Sprintf("the window ends at %.0f %% of its starting amplitude: too short for the half-power bandwidth", 100*rEnd)
+	}
+	return me
+}
