@@ -164,7 +164,7 @@ func (c Channel) Properties() (Props, error) {
 	l = arc(l, c.TW+c.R, h2-c.TF-c.R, c.R, math.Pi, 0.5*math.Pi)
 	l = append(l, [2]float64{c.B, h2 - c.TF}, [2]float64{c.B, h2}, [2]float64{0, h2})
 	j := (2*(c.B-c.TW/2)*c.TF*c.TF*c.TF + (c.H-c.TF)*c.TW*c.TW*c.TW) / 3
-	return finish(ap, j, c.H*c.TW, 5.0/6*2*c.B*c.TF, []Loop{l}), nil
+	return finish(ap, j, 5.0/6*2*c.B*c.TF, c.H*c.TW, []Loop{l}), nil
 }
 
 // Properties returns the properties of the I-section. Torsion: without a
@@ -213,5 +213,5 @@ func (s IShape) Properties() (Props, error) {
 	if j <= 0 { // no fillet, or a shape far outside the fitted range
 		j = (2*s.B*tf*tf*tf + (s.H-tf)*tw*tw*tw) / 3
 	}
-	return finish(ap, j, s.H*tw, 5.0/6*2*s.B*tf, []Loop{l}), nil
+	return finish(ap, j, 5.0/6*2*s.B*tf, s.H*tw, []Loop{l}), nil
 }
