@@ -28,10 +28,13 @@ func DenseOf(a *sparse.Matrix) *mat.SymDense {
 // with gonum, in the same form as Lowest (M-orthonormal vectors, rigid-body
 // flags, residuals). It reduces to a standard symmetric problem with the
 // Cholesky factor L of M, L⁻¹·K·L⁻ᵀ·ψ = λ·ψ, when M is positive definite.
-// When M is singular (massless DOF) it uses instead the factor L of
-// K − σM with σ = −10⁻⁶·tr(K)/tr(M): L⁻¹·M·L⁻ᵀ·ψ = ν·ψ, λ = σ + 1/ν, and
-// drops the infinite eigenvalues (ν ≈ 0). Each λ is then refined by the
-// Rayleigh quotient φᵀKφ / φᵀMφ.
+// When M has zero rows (massless DOF s) it first condenses them statically,
+// K* = K_mm − K_ms·K_ss⁻¹·K_sm, solves K*·φ_m = λ·M_mm·φ_m the same way
+// and recovers φ_s = −K_ss⁻¹·K_sm·φ_m; the infinite eigenvalues of the
+// massless DOF are not returned. For any other singular M it uses the
+// factor L of K − σM with σ = −10⁻⁶·tr(K)/tr(M): L⁻¹·M·L⁻ᵀ·ψ = ν·ψ,
+// λ = σ + 1/ν, dropping ν ≈ 0 (accurate for the lower modes only). Each λ
+// is then refined by the Rayleigh quotient φᵀKφ / φᵀMφ.
 //
 // The whole spectrum is computed, so no Sturm check is made: Checked is
 // false and SturmCount 0. The cost is O(N³); use it for N up to a few
@@ -57,51 +60,168 @@ func Dense(K, M *mat.SymDense, n int) (*Result, error) {
 	var lambdas []float64
 	var vecs [][]float64
 	var shift float64
+	var err error
 	var chM mat.Cholesky
-	if chM.Factorize(M) && chM.Cond() < 1e12 {
-		linv := choleskyInverse(&chM)
-		var c mat.Dense
-		c.Product(linv, K, linv.T())
-		vals, z, err := eigSym(&c)
-		if err != nil {
-			return nil, err
-		}
-		for j, v := range vals {
-			phi := make([]float64, N)
-			mat.NewVecDense(N, phi).MulVec(linv.T(), z.ColView(j))
-			lambdas = append(lambdas, v)
-			vecs = append(vecs, phi)
-		}
-	} else {
+	massless := zeroRows(M)
+	switch {
+	case chM.Factorize(M) && chM.Cond() < 1e12:
+		lambdas, vecs, err = reduceByMass(K, &chM)
+	case len(massless) > 0 && len(massless) < N:
+		lambdas, vecs, err = condensed(K, M, massless)
+	default:
 		shift = -DefaultShiftFraction * scale
-		a := mat.NewSymDense(N, nil)
-		a.AddSym(K, scaledSym(M, -shift))
-		var chA mat.Cholesky
-		if !chA.Factorize(a) {
-			return nil, fmt.Errorf("eigen: Dense: K − σM is not positive definite at σ = %.6g: a mechanism without mass, or K or M is not semidefinite", shift)
-		}
-		linv := choleskyInverse(&chA)
-		var c mat.Dense
-		c.Product(linv, M, linv.T())
-		vals, z, err := eigSym(&c)
-		if err != nil {
-			return nil, err
-		}
-		numax := vals[len(vals)-1]
-		for j := len(vals) - 1; j >= 0; j-- {
-			nu := vals[j]
-			if !(nu > 1e-12*numax) {
-				break // infinite eigenvalues (massless DOF)
-			}
-			phi := make([]float64, N)
-			v := mat.NewVecDense(N, phi)
-			v.MulVec(linv.T(), z.ColView(j))
-			v.ScaleVec(1/math.Sqrt(nu), v) // φᵀ(K−σM)φ = 1/ν ⇒ φᵀMφ = 1
-			lambdas = append(lambdas, shift+1/nu)
-			vecs = append(vecs, phi)
-		}
+		lambdas, vecs, err = reduceByShiftedK(K, M, shift)
+	}
+	if err != nil {
+		return nil, err
 	}
 	return denseResult(K, M, lambdas, vecs, n, shift, scale, true)
+}
+
+// reduceByMass solves K·φ = λ·M·φ with the Cholesky factor of M.
+func reduceByMass(K *mat.SymDense, chM *mat.Cholesky) ([]float64, [][]float64, error) {
+	N := K.SymmetricDim()
+	linv := choleskyInverse(chM)
+	var c mat.Dense
+	c.Product(linv, K, linv.T())
+	vals, z, err := eigSym(&c)
+	if err != nil {
+		return nil, nil, err
+	}
+	var vecs [][]float64
+	for j := range vals {
+		phi := make([]float64, N)
+		mat.NewVecDense(N, phi).MulVec(linv.T(), z.ColView(j))
+		vecs = append(vecs, phi)
+	}
+	return vals, vecs, nil
+}
+
+// zeroRows returns the indices of the rows of M that are entirely zero
+// (massless DOF).
+func zeroRows(M *mat.SymDense) []int {
+	N := M.SymmetricDim()
+	var z []int
+	for i := 0; i < N; i++ {
+		zero := true
+		for j := 0; j < N && zero; j++ {
+			zero = M.At(i, j) == 0
+		}
+		if zero {
+			z = append(z, i)
+		}
+	}
+	return z
+}
+
+// condensed solves the pencil by static condensation of the massless DOF
+// s (zero rows of M): K* = K_mm − K_ms·K_ss⁻¹·K_sm, then K*·φ_m = λ·M_mm·φ_m
+// by the Cholesky factor of M_mm, and φ_s = −K_ss⁻¹·K_sm·φ_m.
+func condensed(K, M *mat.SymDense, s []int) ([]float64, [][]float64, error) {
+	N := K.SymmetricDim()
+	isS := make([]bool, N)
+	for _, i := range s {
+		isS[i] = true
+	}
+	var m []int
+	for i := 0; i < N; i++ {
+		if !isS[i] {
+			m = append(m, i)
+		}
+	}
+	sub := func(a *mat.SymDense, r, c []int) *mat.Dense {
+		d := mat.NewDense(len(r), len(c), nil)
+		for i, ri := range r {
+			for j, cj := range c {
+				d.Set(i, j, a.At(ri, cj))
+			}
+		}
+		return d
+	}
+	kss := mat.NewSymDense(len(s), nil)
+	for i, ri := range s {
+		for j := i; j < len(s); j++ {
+			kss.SetSym(i, j, K.At(ri, s[j]))
+		}
+	}
+	var chS mat.Cholesky
+	if !chS.Factorize(kss) {
+		return nil, nil, errors.New("eigen: Dense: the stiffness of the massless DOF is singular: a mechanism without mass")
+	}
+	ksm := sub(K, s, m)
+	var x mat.Dense // K_ss⁻¹·K_sm
+	if err := chS.SolveTo(&x, ksm); err != nil {
+		return nil, nil, fmt.Errorf("eigen: Dense: condensing massless DOF: %w", err)
+	}
+	var kc mat.Dense
+	kc.Mul(ksm.T(), &x)
+	kstar := mat.NewSymDense(len(m), nil)
+	mstar := mat.NewSymDense(len(m), nil)
+	for i, ri := range m {
+		for j := i; j < len(m); j++ {
+			kstar.SetSym(i, j, K.At(ri, m[j])-0.5*(kc.At(i, j)+kc.At(j, i)))
+			mstar.SetSym(i, j, M.At(ri, m[j]))
+		}
+	}
+	var chM mat.Cholesky
+	if !chM.Factorize(mstar) {
+		return nil, nil, errors.New("eigen: Dense: the mass matrix of the DOF that carry mass is not positive definite")
+	}
+	vals, vm, err := reduceByMass(kstar, &chM)
+	if err != nil {
+		return nil, nil, err
+	}
+	var vecs [][]float64
+	for _, v := range vm {
+		phi := make([]float64, N)
+		for i, ri := range m {
+			phi[ri] = v[i]
+		}
+		for i, si := range s {
+			var d float64
+			for j := range m {
+				d -= x.At(i, j) * v[j]
+			}
+			phi[si] = d
+		}
+		vecs = append(vecs, phi)
+	}
+	return vals, vecs, nil
+}
+
+// reduceByShiftedK solves the pencil with the Cholesky factor L of
+// K − σM: L⁻¹·M·L⁻ᵀ·ψ = ν·ψ, λ = σ + 1/ν, dropping ν ≈ 0 (infinite λ).
+func reduceByShiftedK(K, M *mat.SymDense, shift float64) ([]float64, [][]float64, error) {
+	N := K.SymmetricDim()
+	a := mat.NewSymDense(N, nil)
+	a.AddSym(K, scaledSym(M, -shift))
+	var chA mat.Cholesky
+	if !chA.Factorize(a) {
+		return nil, nil, fmt.Errorf("eigen: Dense: K − σM is not positive definite at σ = %.6g: a mechanism without mass, or K or M is not semidefinite", shift)
+	}
+	linv := choleskyInverse(&chA)
+	var c mat.Dense
+	c.Product(linv, M, linv.T())
+	vals, z, err := eigSym(&c)
+	if err != nil {
+		return nil, nil, err
+	}
+	var lambdas []float64
+	var vecs [][]float64
+	numax := vals[len(vals)-1]
+	for j := len(vals) - 1; j >= 0; j-- {
+		nu := vals[j]
+		if !(nu > 1e-12*numax) {
+			break // infinite eigenvalues (massless DOF)
+		}
+		phi := make([]float64, N)
+		v := mat.NewVecDense(N, phi)
+		v.MulVec(linv.T(), z.ColView(j))
+		v.ScaleVec(1/math.Sqrt(nu), v) // φᵀ(K−σM)φ = 1/ν ⇒ φᵀMφ = 1
+		lambdas = append(lambdas, shift+1/nu)
+		vecs = append(vecs, phi)
+	}
+	return lambdas, vecs, nil
 }
 
 // DenseBuckling returns the n lowest positive load factors of

@@ -223,6 +223,19 @@ func (pb *problem) finish(kr *krylov, rz *ritz, sel []pair, chk sturm, st *Setti
 	for i, p := range sel {
 		phi := make([]float64, n)
 		kr.vector(phi, rz, p.j, pb.purify)
+		if pb.purify && rz.exact {
+			// No residual block to purify with: apply OP explicitly,
+			// φ = OP·y/θ, which puts the massless DOF in static
+			// equilibrium with the others.
+			kr.op.bmul(bphi, phi)
+			if err := kr.op.apply(kphi, phi, bphi); err != nil {
+				return nil, err
+			}
+			res.Solves++
+			for r := range phi {
+				phi[r] = kphi[r] / rz.theta[p.j]
+			}
+		}
 		pb.kmat.MulVec(kphi, phi)
 		pb.b2.MulVec(bphi, phi)
 		phiK, phiB := floats.Dot(phi, kphi), floats.Dot(phi, bphi)

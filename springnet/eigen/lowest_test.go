@@ -1,0 +1,437 @@
+package eigen_test
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"math/rand/v2"
+	"testing"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+	"github.com/trestle-go/trestle/springnet/eigen"
+	"github.com/trestle-go/trestle/springnet/sparse"
+	"gonum.org/v1/gonum/mat"
+)
+
+// Tolerances.
+const (
+	// freqTol is the agreement asked of the sparse and dense eigenvalues
+	// (the task's accuracy target, 1e-8 relative in frequency; we test
+	// the eigenvalues λ = ω², which is stricter by a factor two).
+	freqTol = 1e-8
+	// orthoTol bounds |φᵢᵀMφⱼ − δᵢⱼ|: the Lanczos vectors are converged to
+	// Tol = 1e-10, the eigenvector error is of that order over the gap.
+	orthoTol = 1e-7
+	// residTol bounds the relative residual of a returned pair: round-off
+	// of a converged pair is ~1e-14; 1e-9 leaves room for ill-conditioned
+	// random networks.
+	residTol = 1e-9
+)
+
+// network is a random network of scalar springs between DOF (and to the
+// ground) with masses: a stand-in for a model's K and M with a known
+// structure.
+type network struct {
+	name     string
+	k, m     *sparse.Matrix
+	massless int
+}
+
+// randomNetwork builds a random spring network on n DOF. Springs join
+// random pairs (stiffness spread over two decades); grounded adds springs
+// to the ground at a few DOF (otherwise the network floats: one rigid-body
+// mode per connected part). Mass is lumped (diagonal) or consistent (a
+// bar-like 2×2 block m/6·[2 1; 1 2] on every spring, plus a lumped part);
+// massless DOF get no lumped mass (diagonal M only).
+func randomNetwork(rng *rand.Rand, n int, grounded, consistent bool, massless int) network {
+	bk, bm := sparse.NewBuilder(n), sparse.NewBuilder(n)
+	spring := func(i, j int, k float64) {
+		bk.Add(i, i, k)
+		bk.Add(j, j, k)
+		bk.Add(i, j, -k)
+	}
+	// A spanning chain in random order keeps the network connected.
+	perm := rng.Perm(n)
+	for a := 1; a < n; a++ {
+		spring(perm[a-1], perm[a], math.Pow(10, 2*rng.Float64()-1))
+	}
+	for e := 0; e < 2*n; e++ {
+		i, j := rng.IntN(n), rng.IntN(n)
+		if i != j {
+			k := math.Pow(10, 2*rng.Float64()-1)
+			spring(i, j, k)
+			if consistent {
+				mm := 0.1 * rng.Float64()
+				bm.Add(i, i, mm/3)
+				bm.Add(j, j, mm/3)
+				bm.Add(i, j, mm/6)
+			}
+		}
+	}
+	if grounded {
+		for g := 0; g < 1+n/10; g++ {
+			i := rng.IntN(n)
+			bk.Add(i, i, math.Pow(10, 2*rng.Float64()-1))
+		}
+	}
+	for i := 0; i < n; i++ {
+		if i < massless && !consistent {
+			bm.Add(i, i, 0) // keep the pattern: explicit zero
+			continue
+		}
+		bm.Add(i, i, 0.5+rng.Float64())
+	}
+	name := fmt.Sprintf("n%d", n)
+	if grounded {
+		name += "-grounded"
+	} else {
+		name += "-free"
+	}
+	if consistent {
+		name += "-consistentM"
+	} else {
+		name += "-lumpedM"
+	}
+	if massless > 0 {
+		name += fmt.Sprintf("-%dmassless", massless)
+	}
+	return network{name: name, k: bk.Matrix(), m: bm.Matrix(), massless: massless}
+}
+
+// denseAll returns every finite eigenvalue of the pencil from the dense
+// reference, ascending.
+func denseAll(t *testing.T, k, m *sparse.Matrix) []float64 {
+	N := k.N()
+	res, err := eigen.Dense(eigen.DenseOf(k), eigen.DenseOf(m), N)
+	var few *eigen.FewerModesError
+	if !errors.As(err, &few) {
+		require.NoError(t, err)
+	}
+	return res.Values
+}
+
+// TestLowestAgainstDense compares Lowest with the dense gonum reference on
+// random sparse pencils: eigenvalues, Sturm counts, M-orthonormality,
+// residuals and the rigid-body flags.
+func TestLowestAgainstDense(t *testing.T) {
+	rng := rand.New(rand.NewPCG(1, 1))
+	var cases []network
+	for trial := 0; trial < 36; trial++ {
+		n := 20 + rng.IntN(140)
+		grounded := trial%3 != 0
+		consistent := trial%4 == 1
+		massless := 0
+		if trial%5 == 2 && !consistent {
+			massless = 1 + rng.IntN(n/4)
+		}
+		cases = append(cases, randomNetwork(rng, n, grounded, consistent, massless))
+	}
+	for ci, c := range cases {
+		nev := 1 + (ci*7)%12
+		block := 1 + ci%3
+		t.Run(fmt.Sprintf("%02d-%s-nev%d-block%d", ci, c.name, nev, block), func(t *testing.T) {
+			ref := denseAll(t, c.k, c.m)
+			require.GreaterOrEqual(t, len(ref), nev)
+			res, err := eigen.Lowest(c.k, c.m, nev, &eigen.Settings{BlockSize: block})
+			require.NoError(t, err)
+			require.Equal(t, nev, res.Len())
+			scale := ref[len(ref)-1]
+			for i := 0; i < nev; i++ {
+				if math.Abs(ref[i]) <= 1e-8*scale { // rigid-body mode
+					assert.True(t, res.RigidBody(i), "mode %d: λ = %g should be flagged rigid", i, res.Values[i])
+					assert.InDelta(t, 0, res.Values[i], 1e-9*scale, "mode %d", i)
+					continue
+				}
+				assert.False(t, res.RigidBody(i), "mode %d", i)
+				assert.InEpsilon(t, ref[i], res.Values[i], freqTol, "mode %d", i)
+				assert.Less(t, res.Residuals[i], residTol, "mode %d", i)
+			}
+			// Sturm count: the dense spectrum below the checked shift.
+			require.True(t, res.Checked)
+			below := 0
+			for _, v := range ref {
+				if v < res.SturmShift {
+					below++
+				}
+			}
+			assert.Equal(t, below, res.SturmCount, "eigenvalues below σ₂ = %g", res.SturmShift)
+			cnt, err := eigen.CountBelow(c.k, c.m, res.SturmShift)
+			require.NoError(t, err)
+			assert.Equal(t, below, cnt)
+			assertMOrthonormal(t, res, c.m)
+		})
+	}
+}
+
+func assertMOrthonormal(t *testing.T, res *eigen.Result, m *sparse.Matrix) {
+	t.Helper()
+	N := m.N()
+	mv := make([]float64, N)
+	for i := 0; i < res.Len(); i++ {
+		vi := res.Vector(i)
+		m.MulVec(mv, vi)
+		for j := 0; j <= i; j++ {
+			vj := res.Vector(j)
+			var d float64
+			for r := range vj {
+				d += vj[r] * mv[r]
+			}
+			want := 0.0
+			if i == j {
+				want = 1
+			}
+			assert.InDelta(t, want, d, orthoTol, "φ%dᵀMφ%d", j, i)
+		}
+	}
+}
+
+// chain builds a spring–mass chain of n equal masses m joined by equal
+// springs k; fixed adds a spring from the first mass to the ground.
+func chain(n int, k, m float64, fixed bool) (K, M *sparse.Matrix) {
+	bk, bm := sparse.NewBuilder(n), sparse.NewBuilder(n)
+	if fixed {
+		bk.Add(0, 0, k)
+	}
+	for i := 1; i < n; i++ {
+		bk.Add(i-1, i-1, k)
+		bk.Add(i, i, k)
+		bk.Add(i, i-1, -k)
+	}
+	for i := 0; i < n; i++ {
+		bm.Add(i, i, m)
+	}
+	return bk.Matrix(), bm.Matrix()
+}
+
+// TestChainClosedForm checks Lowest against the natural frequencies of a
+// uniform spring–mass chain.
+func TestChainClosedForm(t *testing.T) {
+	const k, m = 2.5e6, 3.0 // N/m, kg (demo values)
+	cases := []struct {
+		name  string
+		n     int
+		fixed bool
+		nev   int
+		// omega is the closed form of mode j (1-based).
+		omega func(n, j int) float64
+	}{
+		{
+			// Fixed-free chain of n masses: ω_j = 2√(k/m)·sin((2j−1)π/(2(2n+1))),
+			// the standard result (e.g. Meirovitch, "Elements of Vibration
+			// Analysis"; the eigenvalues of tridiag(−1, 2, −1) with a free end).
+			name: "fixed-free", n: 200, fixed: true, nev: 12,
+			omega: func(n, j int) float64 {
+				return 2 * math.Sqrt(k/m) * math.Sin(float64(2*j-1)*math.Pi/float64(2*(2*n+1)))
+			},
+		},
+		{
+			// Free-free chain: ω_j = 2√(k/m)·sin((j−1)π/(2n)), j = 1 the
+			// rigid-body mode (eigenvalues 2 − 2cos((j−1)π/n) of the path
+			// Laplacian; standard, e.g. Strang, "Introduction to Applied
+			// Mathematics", from memory).
+			name: "free-free", n: 150, fixed: false, nev: 8,
+			omega: func(n, j int) float64 {
+				return 2 * math.Sqrt(k/m) * math.Sin(float64(j-1)*math.Pi/float64(2*n))
+			},
+		},
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) {
+			K, M := chain(c.n, k, m, c.fixed)
+			res, err := eigen.Lowest(K, M, c.nev, nil)
+			require.NoError(t, err)
+			require.Equal(t, c.nev, res.Len())
+			for i := 0; i < c.nev; i++ {
+				w := c.omega(c.n, i+1)
+				if w == 0 {
+					assert.True(t, res.RigidBody(i), "mode %d", i)
+					assert.InDelta(t, 0, res.Values[i], 1e-9*k/m)
+					assert.Equal(t, 0.0, res.Frequency(i))
+					continue
+				}
+				assert.False(t, res.RigidBody(i), "mode %d", i)
+				assert.InEpsilon(t, w*w, res.Values[i], freqTol, "mode %d", i)
+				assert.InEpsilon(t, w/(2*math.Pi), res.Frequency(i), freqTol, "mode %d", i)
+			}
+			assert.True(t, res.Checked)
+			assert.Equal(t, c.nev, res.SturmCount)
+		})
+	}
+}
+
+// TestMasslessCondensation: a fixed-free chain of 2n springs k whose odd
+// nodes carry no mass is, after static condensation, a chain of n masses m
+// joined by springs k/2 (two springs in series), so
+// ω_j = 2√(k/(2m))·sin((2j−1)π/(2(2n+1))). Only n eigenvalues are finite.
+func TestMasslessCondensation(t *testing.T) {
+	const n, k, m = 40, 1e6, 2.0
+	N := 2 * n
+	bk, bm := sparse.NewBuilder(N), sparse.NewBuilder(N)
+	bk.Add(0, 0, k) // spring to the ground
+	for i := 1; i < N; i++ {
+		bk.Add(i-1, i-1, k)
+		bk.Add(i, i, k)
+		bk.Add(i, i-1, -k)
+	}
+	for i := 0; i < N; i++ {
+		if i%2 == 1 {
+			bm.Add(i, i, m) // nodes 2, 4, …, 2n (1-based) carry the mass
+		} else {
+			bm.Add(i, i, 0)
+		}
+	}
+	K, M := bk.Matrix(), bm.Matrix()
+	const nev = 10
+	res, err := eigen.Lowest(K, M, nev, nil)
+	require.NoError(t, err)
+	dres, err := eigen.Dense(eigen.DenseOf(K), eigen.DenseOf(M), nev)
+	require.NoError(t, err)
+	for j := 1; j <= nev; j++ {
+		w := 2 * math.Sqrt(k/(2*m)) * math.Sin(float64(2*j-1)*math.Pi/float64(2*(2*n+1)))
+		assert.InEpsilon(t, w*w, res.Values[j-1], freqTol, "sparse mode %d", j)
+		assert.InEpsilon(t, w*w, dres.Values[j-1], freqTol, "dense mode %d", j)
+		// Massless DOF: the vector is the static response of the massive
+		// ones, so each massless node sits midway between its neighbours.
+		v := res.Vector(j - 1)
+		for i := 2; i < N; i += 2 {
+			assert.InDelta(t, 0.5*(v[i-1]+v[i+1]), v[i], 1e-8*math.Abs(v[i-1]-v[i+1])+1e-12)
+		}
+	}
+	assertMOrthonormal(t, res, M)
+
+	// Asking for more modes than there are masses.
+	all, err := eigen.Lowest(K, M, n+3, nil)
+	var few *eigen.FewerModesError
+	require.ErrorAs(t, err, &few)
+	assert.Equal(t, n, few.Found)
+	require.NotNil(t, all)
+	assert.Equal(t, n, all.Len())
+	for i, v := range all.Values {
+		assert.False(t, math.IsInf(v, 0) || math.IsNaN(v), "value %d", i)
+	}
+	_, err = eigen.Dense(eigen.DenseOf(K), eigen.DenseOf(M), n+3)
+	require.ErrorAs(t, err, &few)
+	assert.Equal(t, n, few.Found)
+}
+
+// TestRepeatedEigenvalues uses two identical uncoupled chains: every
+// eigenvalue is double. With block size 1 the Lanczos process finds one
+// copy of each; the Sturm check must catch the rest (continuing the
+// search), never return a short list silently.
+func TestRepeatedEigenvalues(t *testing.T) {
+	const n, k, m = 60, 1e4, 1.0
+	N := 2 * n
+	bk, bm := sparse.NewBuilder(N), sparse.NewBuilder(N)
+	for c := 0; c < 2; c++ {
+		o := c * n
+		bk.Add(o, o, k)
+		for i := 1; i < n; i++ {
+			bk.Add(o+i-1, o+i-1, k)
+			bk.Add(o+i, o+i, k)
+			bk.Add(o+i, o+i-1, -k)
+		}
+	}
+	for i := 0; i < N; i++ {
+		bm.Add(i, i, m)
+	}
+	K, M := bk.Matrix(), bm.Matrix()
+	for _, block := range []int{1, 2, 3} {
+		t.Run(fmt.Sprintf("block%d", block), func(t *testing.T) {
+			res, err := eigen.Lowest(K, M, 6, &eigen.Settings{BlockSize: block})
+			require.NoError(t, err)
+			for j := 1; j <= 3; j++ {
+				// Fixed-free chain closed form (Meirovitch), each twice.
+				w := 2 * math.Sqrt(k/m) * math.Sin(float64(2*j-1)*math.Pi/float64(2*(2*n+1)))
+				assert.InEpsilon(t, w*w, res.Values[2*j-2], freqTol)
+				assert.InEpsilon(t, w*w, res.Values[2*j-1], freqTol)
+			}
+			assert.True(t, res.Checked)
+			assertMOrthonormal(t, res, M)
+		})
+	}
+}
+
+// TestDenseMatchesGonumGeneral cross-checks Dense (Cholesky reduction)
+// against gonum's nonsymmetric eigensolver (mat.Eigen) on M⁻¹·K, an
+// independent route to the same eigenvalues, on a small pencil.
+func TestDenseMatchesGonumGeneral(t *testing.T) {
+	rng := rand.New(rand.NewPCG(1, 1))
+	c := randomNetwork(rng, 25, true, true, 0)
+	K, M := eigen.DenseOf(c.k), eigen.DenseOf(c.m)
+	res, err := eigen.Dense(K, M, 25)
+	require.NoError(t, err)
+	var minvK mat.Dense
+	require.NoError(t, minvK.Solve(M, K))
+	var ge mat.Eigen
+	require.True(t, ge.Factorize(&minvK, mat.EigenNone))
+	var ref []float64
+	for _, v := range ge.Values(nil) {
+		ref = append(ref, real(v))
+	}
+	sortFloats(ref)
+	for i := range ref {
+		// The nonsymmetric solver is backward stable for M⁻¹K, whose
+		// condition is that of M: allow 1e-9 relative.
+		assert.InEpsilon(t, ref[i], res.Values[i], 1e-9, "mode %d", i)
+	}
+}
+
+func sortFloats(a []float64) {
+	for i := 1; i < len(a); i++ {
+		for j := i; j > 0 && a[j] < a[j-1]; j-- {
+			a[j], a[j-1] = a[j-1], a[j]
+		}
+	}
+}
+
+// TestInputErrors: bad input gives a clear error, never a panic.
+func TestInputErrors(t *testing.T) {
+	K, M := chain(5, 1, 1, true)
+	Kbig, _ := chain(6, 1, 1, true)
+	nanB := sparse.NewBuilder(5)
+	for i := 0; i < 5; i++ {
+		nanB.Add(i, i, 1)
+	}
+	nanB.Add(2, 1, math.NaN())
+	zeroM := sparse.NewBuilder(5)
+	zeroM.Add(0, 0, 0)
+	cases := []struct {
+		name string
+		k, m *sparse.Matrix
+		n    int
+		msg  string
+	}{
+		{"n zero", K, M, 0, "asked for 0 modes"},
+		{"n too big", K, M, 6, "asked for 6 modes"},
+		{"size mismatch", Kbig, M, 2, "K is 6×6 but M is 5×5"},
+		{"NaN", nanB.Matrix(), M, 2, "K(2, 1) = NaN"},
+		{"no mass", K, zeroM.Matrix(), 2, "no mass"},
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) {
+			res, err := eigen.Lowest(c.k, c.m, c.n, nil)
+			require.Error(t, err)
+			assert.Nil(t, res)
+			assert.Contains(t, err.Error(), c.msg)
+			assert.Contains(t, err.Error(), "eigen:")
+		})
+	}
+}
+
+// TestMasslessMechanism: a DOF with neither stiffness nor mass makes the
+// pencil singular; the error names it.
+func TestMasslessMechanism(t *testing.T) {
+	bk, bm := sparse.NewBuilder(4), sparse.NewBuilder(4)
+	for i := 0; i < 3; i++ {
+		bk.Add(i, i, 2)
+		bm.Add(i, i, 1)
+	}
+	bk.Add(1, 0, -1)
+	bk.Add(3, 3, 0) // DOF 3: no stiffness …
+	bm.Add(3, 3, 0) // … and no mass
+	_, err := eigen.Lowest(bk.Matrix(), bm.Matrix(), 2, nil)
+	var se *eigen.SingularError
+	require.ErrorAs(t, err, &se)
+	assert.Equal(t, 3, se.Col)
+}
