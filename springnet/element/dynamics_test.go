@@ -278,3 +278,36 @@ func TestShaftFrequencies(t *testing.T) {
 		})
 	}
 }
+
+// TestEngesserColumn: shear flexibility lowers the Euler load of a pinned
+// column to P = P_e / (1 + P_e/(κGA)) (Engesser; Timoshenko and Gere, Theory
+// of Elastic Stability, effect of shearing force on the critical load).
+// With the Timoshenko geometric stiffness the discrete loads fall towards it
+// from above; 8 elements within 0.5 % (task-brief tolerance).
+func TestEngesserColumn(t *testing.T) {
+	const l = 2.5
+	pe := math.Pi * math.Pi * demo.EIz / (l * l)
+	props := demo
+	props.GAsY, props.GAsZ = 5*pe, 1e3*pe // P_e/κGA = 0.2 in the weak plane
+	want := pe / (1 + pe/props.GAsY)
+	prev := math.Inf(1)
+	for _, n := range []int{2, 4, 8, 16} {
+		fs := column(t, n, l)
+		s := newSystem(n + 1)
+		kg := mat.NewDense(s.n, s.n, nil)
+		for i, f := range fs {
+			s.add12(s.k, element.BeamStiffness(f, props), i, i+1)
+			s.add12(kg, element.BeamGeometricStiffness(f, props, -1), i, i+1)
+		}
+		s.fixNode(0, 0, 1, 2, 3)
+		s.fixNode(n, 1, 2)
+		pcr := bucklingLoad(t, s, kg)
+		t.Logf("n = %2d: P/P_Engesser − 1 = %.2e", n, pcr/want-1)
+		if n == 8 {
+			assert.InEpsilon(t, want, pcr, 0.005)
+		}
+		assert.GreaterOrEqual(t, pcr, want*(1-1e-9), "upper bound")
+		assert.Less(t, pcr, prev, "converges from above")
+		prev = pcr
+	}
+}
