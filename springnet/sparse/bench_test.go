@@ -73,6 +73,25 @@ func BenchmarkAnalyze(b *testing.B) {
 	}
 }
 
+// BenchmarkAnalyzeGraph times ordering + symbolic analysis without
+// coordinates (graph nested dissection) and reports nnz(L).
+func BenchmarkAnalyzeGraph(b *testing.B) {
+	for _, nx := range benchSizes {
+		b.Run(fmt.Sprintf("lattice%d/nd", nx), func(b *testing.B) {
+			l := benchLattice(b, nx)
+			var f sparse.Factor
+			b.ReportAllocs()
+			b.ResetTimer()
+			for it := 0; it < b.N; it++ {
+				if err := f.Analyze(l.K, &sparse.Options{Ordering: sparse.NestedDissection}); err != nil {
+					b.Fatal(err)
+				}
+			}
+			b.ReportMetric(float64(f.NNZL()), "nnzL")
+		})
+	}
+}
+
 // BenchmarkFactorize times the numeric factorisation (refactorisation into
 // the analysed storage) with the Auto ordering.
 func BenchmarkFactorize(b *testing.B) {
