@@ -1,0 +1,202 @@
+package springnet
+
+import (
+	"github.com/trestle-go/trestle/springnet/element"
+	"github.com/trestle-go/trestle/springnet/sparse"
+)
+
+// edof is one element degree of freedom: component c (0..5) of node n.
+type edof struct {
+	n NodeID
+	c int
+}
+
+// elemStiffness writes the global stiffness of element i into k over the
+// returned DOF list (at most 12). A lifted compression-only foot has zero
+// stiffness but keeps its DOF, so the sparsity pattern does not change.
+func (nt *net) elemStiffness(i int, k *[12][12]float64, dofs *[12]edof) int {
+	e := &nt.m.elems[i]
+	p := &nt.el[i]
+	nd := 0
+	push := func(n NodeID, c int) { dofs[nd] = edof{n, c}; nd++ }
+	switch e.kind {
+	case BarKind:
+		kb := element.BarStiffness(p.frame, p.mp.ea)
+		for c := 0; c < 3; c++ {
+			push(e.a, c)
+		}
+		for c := 0; c < 3; c++ {
+			push(e.b, c)
+		}
+		for r := 0; r < 6; r++ {
+			copy(k[r][:6], kb[r][:])
+		}
+	case SpringKind:
+		orig := e.spring.K.arr()
+		var idx [6]int
+		nc := 0
+		for c := 0; c < 6; c++ {
+			if (c < 3 && p.axial != 0) || orig[c] != 0 {
+				idx[nc] = c
+				nc++
+			}
+		}
+		for j := 0; j < nc; j++ {
+			push(e.a, idx[j])
+		}
+		for j := 0; j < nc; j++ {
+			push(e.b, idx[j])
+		}
+		for r := 0; r < nd; r++ {
+			for c := 0; c < nd; c++ {
+				k[r][c] = 0
+			}
+		}
+		for j := 0; j < nc; j++ {
+			v := p.k6[idx[j]]
+			k[j][j], k[j+nc][j+nc] = v, v
+			k[j][j+nc], k[j+nc][j] = -v, -v
+		}
+		if p.axial != 0 {
+			ka := element.AxialSpringStiffness(p.frame, p.axial)
+			// Translations are the first three of each end's list.
+			for r := 0; r < 3; r++ {
+				for c := 0; c < 3; c++ {
+					k[r][c] += ka[r][c]
+					k[r][c+nc] += ka[r][c+3]
+					k[r+nc][c] += ka[r+3][c]
+					k[r+nc][c+nc] += ka[r+3][c+3]
+				}
+			}
+		}
+	case FootKind:
+		orig := e.foot.K.arr()
+		for c := 0; c < 6; c++ {
+			if orig[c] != 0 {
+				push(e.a, c)
+			}
+		}
+		for r := 0; r < nd; r++ {
+			for c := 0; c < nd; c++ {
+				k[r][c] = 0
+			}
+			if p.active {
+				k[r][r] = p.k6[dofs[r].c]
+			}
+		}
+	case BeamKind:
+		kb := element.BeamStiffness(p.frame, p.bp)
+		var keep [12]int
+		for c := 0; c < 12; c++ {
+			n, comp := e.a, c
+			if c >= 6 {
+				n, comp = e.b, c-6
+			}
+			if comp >= 3 && ((c < 6 && !p.rotA) || (c >= 6 && !p.rotB)) {
+				continue
+			}
+			keep[nd] = c
+			push(n, comp)
+		}
+		for r := 0; r < nd; r++ {
+			for c := 0; c < nd; c++ {
+				k[r][c] = kb[keep[r]][keep[c]]
+			}
+		}
+	}
+	return nd
+}
+
+// assemble builds the stiffness matrix over the free DOF into b (reset
+// first) and returns it. Every equation gets an explicit diagonal entry so
+// the pattern is the same whatever the values.
+func (nt *net) assemble(b *sparse.Builder) *sparse.Matrix {
+	d := &nt.dm
+	b.Reset(d.n)
+	for i := 0; i < d.n; i++ {
+		b.Add(i, i, 0)
+	}
+	var k [12][12]float64
+	var dofs [12]edof
+	var tbuf [12][3]term
+	var ts [12][]term
+	for i := range nt.m.elems {
+		nd := nt.elemStiffness(i, &k, &dofs)
+		keepZeros := nt.m.elems[i].kind == FootKind
+		for a := 0; a < nd; a++ {
+			ts[a] = d.nodeTerms(dofs[a].n, dofs[a].c, nt.m.nodes[dofs[a].n].at, &tbuf[a])
+		}
+		for a := 0; a < nd; a++ {
+			for bb := 0; bb < nd; bb++ {
+				v := k[a][bb]
+				if v == 0 && !keepZeros {
+					continue
+				}
+				for _, ta := range ts[a] {
+					for _, tb := range ts[bb] {
+						if ta.eq >= tb.eq {
+							b.Add(ta.eq, tb.eq, v*ta.coef*tb.coef)
+						}
+					}
+				}
+			}
+		}
+	}
+	return b.Matrix()
+}
+
+// nodeDisp returns the six displacements of node n from the equation
+// vector u (zero for fixed or absent DOF).
+func (d *dofMap) nodeDisp(n NodeID, at Vec, u []float64) [6]float64 {
+	o := d.owner(n)
+	return d.pointDisp(o, at, u)
+}
+
+// pointDisp returns the motion of the point at, rigidly attached to owner o.
+func (d *dofMap) pointDisp(o int, at Vec, u []float64) [6]float64 {
+	var w [6]float64
+	for c, eq := range d.ownerEq[o] {
+		if eq >= 0 {
+			w[c] = u[eq]
+		}
+	}
+	r := at.Sub(d.ownerRef[o])
+	if r != (Vec{}) {
+		t := vecOf([3]float64{w[3], w[4], w[5]}).Cross(r)
+		w[0] += t.X
+		w[1] += t.Y
+		w[2] += t.Z
+	}
+	return w
+}
+
+// addOwnerLoad adds force f and moment mo acting at point at to owner o's
+// load (about the owner's reference point).
+func (d *dofMap) addOwnerLoad(dst [][6]float64, o int, at Vec, f, mo Vec) {
+	r := at.Sub(d.ownerRef[o])
+	mo = mo.Add(r.Cross(f))
+	dst[o][0] += f.X
+	dst[o][1] += f.Y
+	dst[o][2] += f.Z
+	dst[o][3] += mo.X
+	dst[o][4] += mo.Y
+	dst[o][5] += mo.Z
+}
+
+// eqVector scatters owner loads onto the free equations.
+func (d *dofMap) eqVector(dst []float64, ol [][6]float64) []float64 {
+	if dst == nil {
+		dst = make([]float64, d.n)
+	}
+	for i := range dst {
+		dst[i] = 0
+	}
+	for o := range ol {
+		for c, eq := range d.ownerEq[o] {
+			if eq >= 0 {
+				dst[eq] += ol[o][c]
+			}
+		}
+	}
+	return dst
+}
