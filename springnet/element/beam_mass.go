@@ -4,20 +4,28 @@ package element
 // axes [kg, kg·m, kg·m²], for mass per length m [kg/m] and polar mass moment
 // of inertia per length mj [kg·m] (ρ·Ip; the torsional inertia). In local
 // axes: axial and torsion (m·L/6)·[2 1; 1 2] and (mj·L/6)·[2 1; 1 2]; the
-// x–y bending block over (v_a, θz_a, v_b, θz_b)
+// x–y bending block over (v_a, θz_a, v_b, θz_b), with Φ as in
+// BeamLocalStiffness (0 for Euler–Bernoulli),
 //
-//	(m·L/420)·[ 156   22L   54   −13L
-//	            22L   4L²   13L  −3L²
-//	            54    13L   156  −22L
-//	           −13L  −3L²  −22L   4L² ]
+//	m·L/(840(1+Φ)²)·[ a   b   c   d
+//	                  b   e  −d   g
+//	                  c  −d   a  −b
+//	                  d   g  −b   e ]
 //
-// and the x–z block over (w, θy) with the w–θ couplings reversed
-// (Przemieniecki, Theory of Matrix Structural Analysis, inertia properties
-// of a beam element; Cook et al., 4th ed., consistent mass). Rotary inertia of the cross-section in bending is
-// not included. Releases and end springs are honoured by the congruence
-// Pᵀ·M·P with the static map of BeamStiffness; p serves only for those.
+//	a = 312 + 588Φ + 280Φ²      b = (44 + 77Φ + 35Φ²)·L
+//	c = 108 + 252Φ + 140Φ²      d = −(26 + 63Φ + 35Φ²)·L
+//	e = (8 + 14Φ + 7Φ²)·L²      g = −(6 + 14Φ + 7Φ²)·L²
+//
+// which for Φ = 0 is the familiar (m·L/420)·[156 22L 54 −13L; …]
+// (Przemieniecki, Theory of Matrix Structural Analysis, inertia of a beam
+// element with shear deformation, translational part; rederived for this
+// package by integrating m·v² over the Timoshenko cubics of DeflectedShape).
+// The x–z block over (w, θy) has the w–θ couplings reversed. Rotary inertia
+// of the cross-section in bending is not included. Releases and end springs
+// are honoured by the congruence Pᵀ·M·P with the static map of
+// BeamStiffness; p serves only for Φ and those.
 func BeamConsistentMass(f Frame, p BeamProps, m, mj float64) Mat12 {
-	ml := beamLocalMass(m, mj, f.L)
+	ml := beamLocalMass(m, mj, f.L, shearPhi(p.EIz, p.GAsY, f.L), shearPhi(p.EIy, p.GAsZ, f.L))
 	if p.hasJoints() {
 		var j joints
 		j.init(p, f.L)
@@ -27,24 +35,29 @@ func BeamConsistentMass(f Frame, p BeamProps, m, mj float64) Mat12 {
 	return toGlobal(&ml, f)
 }
 
-func beamLocalMass(m, mj, l float64) Mat12 {
+func beamLocalMass(m, mj, l, phiY, phiZ float64) Mat12 {
 	var k Mat12
 	ax := m * l / 6
 	k[0][0], k[6][6], k[0][6], k[6][0] = 2*ax, 2*ax, ax, ax
 	tj := mj * l / 6
 	k[3][3], k[9][9], k[3][9], k[9][3] = 2*tj, 2*tj, tj, tj
-	s := m * l / 420
 	for _, pl := range [2]struct {
 		t, r, tb, rb int
-		sign         float64
-	}{{1, 5, 7, 11, 1}, {2, 4, 8, 10, -1}} {
-		c1 := pl.sign * 22 * l * s
-		c2 := pl.sign * 13 * l * s
+		sign, phi    float64
+	}{{1, 5, 7, 11, 1, phiY}, {2, 4, 8, 10, -1, phiZ}} {
+		ph := pl.phi
+		s := m * l / (840 * (1 + ph) * (1 + ph))
+		a := (312 + 588*ph + 280*ph*ph) * s
+		b := pl.sign * (44 + 77*ph + 35*ph*ph) * l * s
+		c := (108 + 252*ph + 140*ph*ph) * s
+		d := -pl.sign * (26 + 63*ph + 35*ph*ph) * l * s
+		e := (8 + 14*ph + 7*ph*ph) * l * l * s
+		g := -(6 + 14*ph + 7*ph*ph) * l * l * s
 		addBlock(&k, [4]int{pl.t, pl.r, pl.tb, pl.rb}, [4][4]float64{
-			{156 * s, c1, 54 * s, -c2},
-			{c1, 4 * l * l * s, c2, -3 * l * l * s},
-			{54 * s, c2, 156 * s, -c1},
-			{-c2, -3 * l * l * s, -c1, 4 * l * l * s},
+			{a, b, c, d},
+			{b, e, -d, g},
+			{c, -d, a, -b},
+			{d, g, -b, e},
 		})
 	}
 	return k
