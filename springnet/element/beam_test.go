@@ -68,6 +68,18 @@ func TestBeamStiffnessInvariants(t *testing.T) {
 					assert.InDelta(t, 0, fr[j], 1e-10*scale, "rigid mode %d, row %d", i, j)
 				}
 			}
+			// Force recovery under rigid motion: nothing (a small rotation
+			// of 1e-3 rad, so the moment scale is EI·1e-3/L).
+			for i, r := range rigidBasis(f.A, f.B()) {
+				var ua, ub element.Vec6
+				for j := range 6 {
+					ua[j], ub[j] = 1e-3*r[j], 1e-3*r[6+j]
+				}
+				bf := element.BeamEndForces(f, tc.p, ua, ub)
+				for j, v := range bf.Local {
+					assert.InDelta(t, 0, v, 1e-10*scale*1e-3, "rigid mode %d, end force %d", i, j)
+				}
+			}
 			// rankTol: singular values of a condensed beam span about EA/L
 			// to GJ/L·(1/L²)… ~1e-5 of the largest; round-off sits near
 			// 1e-16, so 1e-11 separates them cleanly.
@@ -286,6 +298,11 @@ func TestReleasedEndCarriesNoMoment(t *testing.T) {
 		assert.InDelta(t, 0, v, tol)
 	}
 	assert.Greater(t, math.Abs(bf.A.N), 1.0)
+	// Torsion released at both ends: no torque.
+	bf = element.BeamEndForces(f, withJoints(demo, element.ReleaseRX, element.ReleaseRX, element.Vec3{}, element.Vec3{}), ua, ub)
+	assert.InDelta(t, 0, bf.A.T, tol)
+	assert.InDelta(t, 0, bf.B.T, tol)
+	assert.Greater(t, math.Abs(bf.A.Mz), 1e3*tol, "bending still carried")
 }
 
 // TestDeflectedShape: the cantilever elastic curve under tip load is
