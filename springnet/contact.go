@@ -107,26 +107,49 @@ func (s *Solver) tipping(nt *net, fg, fv []float64, co []int, tol float64) (Tipp
 	n := len(fg)
 	ug, uv := make([]float64, n), make([]float64, n)
 	lam := 1.0
-	maxEvents := 4*len(co) + 20
+	last := ""
+	maxEvents := 8*len(co) + 20
 	for ev := 0; ev < maxEvents; ev++ {
 		if err := s.factor(nt); err != nil {
-			return Tipping{}, err // cannot happen: the case's own set factorised
+			var me *MechanismError
+			if errors.As(err, &me) && last != "" {
+				return Tipping{Factor: lam, Found: true, LastFoot: last}, nil
+			}
+			return Tipping{}, err
 		}
 		s.solve(ug, fg)
 		s.solve(uv, fv)
+		// First make the contact set consistent at λ (feet that unload
+		// together, at the same λ, leave one after the other).
+		worst, worstR := -1, -tol
+		readmit := false
+		for _, i := range co {
+			r := nt.footFZ(i, ug) + lam*nt.footFZ(i, uv)
+			switch {
+			case nt.el[i].active && r < worstR:
+				worst, worstR = i, r
+			case !nt.el[i].active && r > tol:
+				nt.el[i].active = true
+				readmit = true
+			}
+		}
+		if worst >= 0 {
+			nt.el[worst].active = false
+			last = nt.m.elems[worst].foot.Name
+			continue
+		}
+		if readmit {
+			continue
+		}
 		next, who := math.Inf(1), -1
 		for _, i := range co {
 			rg, rv := nt.footFZ(i, ug), nt.footFZ(i, uv)
-			if nt.el[i].active && rv < 0 {
-				// In contact: unloads where rg + λ·rv = 0.
-				if l := -rg / rv; l > lam*(1+1e-12) && l < next {
-					next, who = l, i
-				}
-			}
-			if !nt.el[i].active && rv > 0 {
-				// Lifted: touches again where rg + λ·rv = 0 (from below).
-				if l := -rg / rv; l > lam*(1+1e-12) && l < next {
-					next, who = l, i
+			// In contact and unloading, or lifted and coming down: the
+			// reaction rg + λ·rv crosses zero at λ = −rg/rv.
+			if (nt.el[i].active && rv < 0) || (!nt.el[i].active && rv > 0) {
+				// A foot already at zero (round-off either side) counts now.
+				if l := -rg / rv; l > lam*(1-eventTol) && l < next {
+					next, who = math.Max(l, lam), i
 				}
 			}
 		}
@@ -134,20 +157,18 @@ func (s *Solver) tipping(nt *net, fg, fv []float64, co []int, tol float64) (Tipp
 			return Tipping{}, nil
 		}
 		nt.el[who].active = !nt.el[who].active
-		lam = next
 		if !nt.el[who].active {
-			// Does the stand still stand without this foot?
-			if err := s.factor(nt); err != nil {
-				var me *MechanismError
-				if errors.As(err, &me) {
-					return Tipping{Factor: lam, Found: true, LastFoot: nt.m.elems[who].foot.Name}, nil
-				}
-				return Tipping{}, err
-			}
+			last = nt.m.elems[who].foot.Name
 		}
+		lam = next
 	}
 	return Tipping{}, nil
 }
+
+// eventTol is the relative band around the current load factor within
+// which a contact change counts as happening now: feet that unload at the
+// same factor in exact arithmetic differ by round-off.
+const eventTol = 1e-9
 
 func isZero(x []float64) bool {
 	for _, v := range x {
