@@ -3,6 +3,7 @@ package springnet
 import (
 	"errors"
 	"fmt"
+	"math"
 
 	"github.com/trestle-go/trestle/materials"
 	"github.com/trestle-go/trestle/sections"
@@ -250,6 +251,16 @@ func (m *Model) checkElem(e *elem) []error {
 		}
 		if e.a == e.b {
 			bad("both ends are the same node")
+		}
+		// A per-direction force between points apart across that direction
+		// would leave its moment r × F unbalanced.
+		r := m.nodes[e.b].at.Sub(m.nodes[e.a].at)
+		tiny := 1e-9 * math.Max(1, math.Max(m.nodes[e.a].at.Norm(), m.nodes[e.b].at.Norm()))
+		for c, v := range ks[:3] {
+			if v != 0 && r.Cross(unitVec(c)).Norm() > tiny {
+				bad("stiffness %s acts between ends %.3g m apart across it, which leaves a moment unbalanced; "+
+					"put both ends at one point (a zero-length link), use Axial, or use a Foot", dofNames[c], r.Norm())
+			}
 		}
 	case FootKind:
 		f := &e.foot

@@ -127,3 +127,6 @@ const StandardGravity = 9.80665
 // Gravity returns the acceleration vector of f times standard gravity
 // acting downwards (−Z) [m/s²]; Gravity(1) is ordinary self-weight.
 func Gravity(f float64) Vec { return Vec{Z: -f * StandardGravity} }
+
+// Vec3 returns v as an array, the form the element package takes.
+func (v Vec) Vec3() [3]float64 { return [3]float64{v.X, v.Y, v.Z} }
