@@ -216,8 +216,10 @@ func (r *randomNet) reference(t *testing.T) []float64 {
 	return uf.RawVector().Data
 }
 
+func newRNG() *rand.Rand { return rand.New(rand.NewPCG(1, 1)) }
+
 func TestAgainstDenseReference(t *testing.T) {
-	rng := rand.New(rand.NewPCG(1, 1))
+	rng := newRNG()
 	const networks = 50
 	for k := 0; k < networks; k++ {
 		// Node counts from 2 to 333 on a geometric scale: 12 to ~2000 DOF.

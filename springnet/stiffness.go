@@ -83,13 +83,6 @@ func (s *Solver) MountStiffness(m *Model, p Place, st *StaticSettings) (*PointSt
 			ps.c[i][j] = w[i]
 		}
 	}
-	// Symmetrise (round-off only; reciprocity makes C symmetric).
-	for i := 0; i < ncol; i++ {
-		for j := 0; j < i; j++ {
-			v := (ps.c[i][j] + ps.c[j][i]) / 2
-			ps.c[i][j], ps.c[j][i] = v, v
-		}
-	}
 	for i := 0; i < 3; i++ {
 		if !(ps.c[i][i] > 0) || !finite(ps.c[i][i]) {
 			return nil, fmt.Errorf("springnet: stiffness at %s: the place is held rigidly in %v (a fixed support); its stiffness there is infinite", ps.name, dofAt(i))
@@ -118,10 +111,12 @@ func (s *Solver) MountStiffness(m *Model, p Place, st *StaticSettings) (*PointSt
 // invertSym inverts the leading n×n block of a symmetric positive definite
 // matrix with gonum's Cholesky; ok is false if it is not positive definite.
 func invertSym(a [][6]float64, n int) ([6][6]float64, bool) {
+	// C is symmetric by reciprocity up to round-off; use the mean of the
+	// two triangles (the raw C is kept for Compliance3/6).
 	s := mat.NewSymDense(n, nil)
 	for i := 0; i < n; i++ {
 		for j := i; j < n; j++ {
-			s.SetSym(i, j, a[i][j])
+			s.SetSym(i, j, (a[i][j]+a[j][i])/2)
 		}
 	}
 	var ch mat.Cholesky
