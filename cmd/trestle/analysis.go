@@ -1,0 +1,327 @@
+package main
+
+import (
+	"errors"
+	"fmt"
+	"math"
+
+	"github.com/trestle-go/trestle/materials"
+	"github.com/trestle-go/trestle/springnet"
+)
+
+// cautions end every report.
+var cautions = []string{
+	"trestle is a linear elastic, small-displacement model; its numbers are only as good as the model and the material ranges given to it.",
+	"Check anchoring, tipping, floor capacity and local building codes.",
+	"Defer to licensed engineering practice for anything that carries people or critical loads.",
+}
+
+// pendingStatic names the analyses that springnet does not offer yet in
+// this build; the report says so instead of leaving them out silently.
+var pendingAnalyses = []string{
+	"natural frequencies and modal damping (springnet modes: not in this build yet)",
+	"buckling load factors (springnet buckling: not in this build yet)",
+	"member checks with bending for beams (springnet member checks: not in this build yet; bars are rated on axial stress)",
+}
+
+// elementLabel is the name of element e, or "<kind> #<i>" when it has none.
+func elementLabel(m *springnet.Model, e springnet.ElementID) string {
+	if n := m.ElementName(e); n != "" {
+		return n
+	}
+	return fmt.Sprintf("%s #%d", m.ElementKind(e), int(e))
+}
+
+// mountPlaces returns the places whose stiffness the report gives: the
+// mounts, else the rigid groups.
+func mountPlaces(m *springnet.Model) []springnet.Place {
+	var ps []springnet.Place
+	for i := 0; i < m.NumMounts(); i++ {
+		ps = append(ps, springnet.MountID(i))
+	}
+	if len(ps) == 0 {
+		for i := 0; i < m.NumGroups(); i++ {
+			ps = append(ps, springnet.GroupID(i))
+		}
+	}
+	return ps
+}
+
+// analysed is a model with its static results at one material level, kept
+// together so that reports and pictures draw on the same solve.
+type analysed struct {
+	model  *springnet.Model
+	static *springnet.StaticResult
+	report *AnalysisReport
+}
+
+// explain turns springnet's typed errors into a message for a person who
+// does not know the solver.
+func explain(name string, err error) error {
+	var mech *springnet.MechanismError
+	var tip *springnet.TippingError
+	switch {
+	case errors.As(err, &mech):
+		return fmt.Errorf("%s: the stand is a mechanism, it can move without resistance: %v. "+
+			"Add a brace, a support or a stiffer joint there", name, err)
+	case errors.As(err, &tip):
+		return fmt.Errorf("%s: %v", name, err)
+	}
+	return fmt.Errorf("%s: %w", name, err)
+}
+
+// analyse runs the static analysis and the mount stiffness of m at level l
+// and builds the report. Suspect solves (a *springnet.ConditionError) are
+// kept and reported as warnings.
+func analyse(m *springnet.Model, name string, l materials.Level) (*analysed, error) {
+	var s springnet.Solver
+	st := &springnet.StaticSettings{Level: l}
+	rep := &AnalysisReport{Schema: schemaAnalysis, Model: name, Level: l.String(),
+		Warnings: []string{}, Mounts: []MountStiffness{}, Cases: []CaseReport{},
+		Pending: append([]string(nil), pendingAnalyses...), Cautions: cautions}
+	res, err := s.Static(m, st)
+	var cond *springnet.ConditionError
+	if errors.As(err, &cond) && res != nil {
+		rep.Warnings = append(rep.Warnings, "suspect solve: "+err.Error())
+	} else if err != nil {
+		return nil, explain(name, err)
+	}
+	rep.Summary = summarise(m, res)
+	for _, p := range mountPlaces(m) {
+		ps, err := s.MountStiffness(m, p, st)
+		if errors.As(err, &cond) && ps != nil {
+			rep.Warnings = append(rep.Warnings, "suspect solve: "+err.Error())
+		} else if err != nil {
+			return nil, explain(name, err)
+		}
+		mr := mountReport(ps)
+		mr.Name = placeName(m, p)
+		rep.Mounts = append(rep.Mounts, mr)
+	}
+	for c := 0; c < res.NumCases(); c++ {
+		rep.Cases = append(rep.Cases, caseReport(m, res.Case(springnet.CaseID(c))))
+	}
+	rep.Governing = governing(rep)
+	rep.Warnings = append(rep.Warnings, alerts(rep)...)
+	return &analysed{model: m, static: res, report: rep}, nil
+}
+
+func summarise(m *springnet.Model, res *springnet.StaticResult) ModelSummary {
+	s := ModelSummary{Nodes: m.NumNodes(), Groups: m.NumGroups(), Mounts: m.NumMounts(), Cases: m.NumCases()}
+	for e := 0; e < m.NumElements(); e++ {
+		switch m.ElementKind(springnet.ElementID(e)) {
+		case springnet.BarKind:
+			s.Bars++
+		case springnet.BeamKind:
+			s.Beams++
+		case springnet.SpringKind:
+			s.Springs++
+		case springnet.FootKind:
+			s.Feet++
+		}
+	}
+	// The weight is what the floor and supports carry in the first plain
+	// case that has a vertical load.
+	for c := 0; c < res.NumCases(); c++ {
+		if m.IsCombination(springnet.CaseID(c)) {
+			continue
+		}
+		eq := res.Case(springnet.CaseID(c)).Equilibrium()
+		if eq.Reactions.FZ != 0 {
+			s.WeightN = eq.Reactions.FZ
+			break
+		}
+	}
+	return s
+}
+
+func mountReport(ps *springnet.PointStiffness) MountStiffness {
+	k, dir := ps.Principal()
+	mr := MountStiffness{Name: ps.Name(),
+		XNPerM:         ps.Along(springnet.Vec{X: 1}),
+		YNPerM:         ps.Along(springnet.Vec{Y: 1}),
+		ZNPerM:         ps.Along(springnet.Vec{Z: 1}),
+		PrincipalNPerM: k}
+	for i := range dir {
+		mr.PrincipalDirection[i] = [3]float64{clean(dir[i].X), clean(dir[i].Y), clean(dir[i].Z)}
+	}
+	return mr
+}
+
+// roundOff is the relative size below which a result is taken as
+// round-off of the double-precision solve and printed as zero.
+const roundOff = 1e-9
+
+// cut returns 0 if |v| <= tiny, else v.
+func cut(v, tiny float64) float64 {
+	if math.Abs(v) <= tiny {
+		return 0
+	}
+	return v
+}
+
+// placeName is the bare name of a mount, group or node.
+func placeName(m *springnet.Model, p springnet.Place) string {
+	switch p := p.(type) {
+	case springnet.MountID:
+		return m.MountName(p)
+	case springnet.GroupID:
+		return m.GroupName(p)
+	case springnet.NodeID:
+		return m.NodeName(p)
+	}
+	return m.PlaceName(p)
+}
+
+// clean rounds components below 1e-12 to zero so that directions print
+// the same on every machine.
+func clean(v float64) float64 {
+	if math.Abs(v) < 1e-12 {
+		return 0
+	}
+	return v
+}
+
+func caseReport(m *springnet.Model, cr *springnet.CaseResult) CaseReport {
+	r := CaseReport{Name: cr.Name(), Combination: m.IsCombination(cr.ID()), Residual: cr.Residual(),
+		Feet: []FootReport{}, Supports: []SupportReport{}, Members: []MemberReport{}, Mounts: []MountMotion{}}
+	for n := 0; n < m.NumNodes(); n++ {
+		id := springnet.NodeID(n)
+		d := cr.Displacement(id).Translation().Norm()
+		if d > r.MaxDisplacementM {
+			r.MaxDisplacementM, r.MaxDisplacementNode = d, m.NodeName(id)
+		}
+		if m.Fixed(id) != 0 {
+			re := cr.Reaction(id)
+			if re != (springnet.Load{}) {
+				r.Supports = append(r.Supports, SupportReport{Node: m.NodeName(id),
+					FXN: re.FX, FYN: re.FY, FZN: re.FZ, MXNm: re.MX, MYNm: re.MY, MZNm: re.MZ})
+			}
+		}
+	}
+	for _, f := range cr.Feet() {
+		name := f.Name
+		if name == "" {
+			name = elementLabel(m, f.Element)
+		}
+		r.Feet = append(r.Feet, FootReport{Name: name, Node: m.NodeName(f.Node),
+			FXN: f.Reaction.FX, FYN: f.Reaction.FY, FZN: f.Reaction.FZ, Share: f.Share,
+			Uplift: f.Uplift && !f.Lifted, Lifted: f.Lifted})
+	}
+	for e := 0; e < m.NumElements(); e++ {
+		id := springnet.ElementID(e)
+		k := m.ElementKind(id)
+		if k == springnet.FootKind {
+			continue
+		}
+		f := cr.Force(id)
+		mr := MemberReport{Name: elementLabel(m, id), Kind: k.String(), AxialN: f.Axial, StressPa: f.Stress,
+			Utilisation: f.Utilisation, Rated: f.Utilisation != 0}
+		r.Members = append(r.Members, mr)
+		if math.Abs(f.Utilisation) > r.MaxUtilisation {
+			r.MaxUtilisation, r.MaxUtilisationMember = math.Abs(f.Utilisation), mr.Name
+		}
+	}
+	// Motions below roundOff × the largest are round-off and print as 0.
+	tiny := roundOff * r.MaxDisplacementM
+	for _, p := range mountPlaces(m) {
+		d := cr.At(p)
+		r.Mounts = append(r.Mounts, MountMotion{Name: placeName(m, p),
+			UXM: cut(d.UX, tiny), UYM: cut(d.UY, tiny), UZM: cut(d.UZ, tiny)})
+	}
+	eq := cr.Equilibrium()
+	r.Equilibrium = EquilibriumReport{
+		AppliedN:   [3]float64{eq.Applied.FX, eq.Applied.FY, eq.Applied.FZ},
+		ReactionsN: [3]float64{eq.Reactions.FX, eq.Reactions.FY, eq.Reactions.FZ},
+		ForceError: eq.ForceError, MomentError: eq.MomentError}
+	tp := cr.Tipping()
+	r.Tipping = TippingReport{Found: tp.Found, Factor: tp.Factor, LastFoot: tp.LastFoot}
+	return r
+}
+
+// governing picks the numbers a designer reads first from a report.
+func governing(rep *AnalysisReport) Governing {
+	g := Governing{LiftedFeet: []string{}, UpliftFeet: []string{}}
+	first := true
+	for _, mt := range rep.Mounts {
+		// Ties within round-off keep the first mount named.
+		if first || mt.PrincipalNPerM[0] < g.SoftestStiffnessNPerM*(1-1e-9) {
+			g.SoftestMount, g.SoftestStiffnessNPerM, g.SoftestDirection = mt.Name, mt.PrincipalNPerM[0], mt.PrincipalDirection[0]
+			first = false
+		}
+	}
+	for _, c := range rep.Cases {
+		if c.MaxUtilisation > g.MaxUtilisation {
+			g.MaxUtilisation, g.MaxUtilisationMember, g.MaxUtilisationCase = c.MaxUtilisation, c.MaxUtilisationMember, c.Name
+		}
+		if c.MaxDisplacementM > g.MaxDisplacementM {
+			g.MaxDisplacementM, g.MaxDisplacementNode, g.MaxDisplacementCase = c.MaxDisplacementM, c.MaxDisplacementNode, c.Name
+		}
+		for _, f := range c.Feet {
+			if f.Lifted {
+				g.LiftedFeet = append(g.LiftedFeet, fmt.Sprintf("%s (%s)", f.Name, c.Name))
+			}
+			if f.Uplift {
+				g.UpliftFeet = append(g.UpliftFeet, fmt.Sprintf("%s (%s)", f.Name, c.Name))
+			}
+		}
+		if c.Tipping.Found && (g.TippingFactor == nil || c.Tipping.Factor < *g.TippingFactor) {
+			f := c.Tipping.Factor
+			g.TippingFactor, g.TippingCase = &f, c.Name
+		}
+	}
+	if rep.Modes != nil && len(rep.Modes.Modes) > 0 {
+		f := rep.Modes.Modes[0].FrequencyHz
+		g.FirstFrequencyHz = &f
+	}
+	if rep.Buckling != nil && len(rep.Buckling.Factors) > 0 {
+		f := rep.Buckling.Factors[0]
+		g.BucklingFactor, g.BucklingCase = &f, rep.Buckling.Case
+	}
+	return g
+}
+
+// Thresholds for the flags at the top of a report.
+const (
+	// utilisationFlag: members above this share of their strength are
+	// named at the top (common practice: keep stands well inside elastic
+	// limits for stiffness-critical work).
+	utilisationFlag = 0.5
+	// tippingFlag: a tipping factor below this on the non-gravity loads is
+	// flagged (common practice: a margin of 1.5 against overturning).
+	tippingFlag = 1.5
+)
+
+// alerts returns the warnings a person must see first: lifted feet,
+// uplift, a small tipping margin, members over strength.
+func alerts(rep *AnalysisReport) []string {
+	var w []string
+	g := rep.Governing
+	if len(g.LiftedFeet) > 0 {
+		w = append(w, fmt.Sprintf("LIFTED FEET: %s are out of contact; the stand rocks on the rest", join(g.LiftedFeet)))
+	}
+	if len(g.UpliftFeet) > 0 {
+		w = append(w, fmt.Sprintf("UPLIFT: %s pull the stand down; they need anchors that carry tension", join(g.UpliftFeet)))
+	}
+	if g.TippingFactor != nil && *g.TippingFactor < tippingFlag {
+		w = append(w, fmt.Sprintf("TIPPING: case %q tips at %.2f × its non-gravity loads (below %.1f)", g.TippingCase, *g.TippingFactor, tippingFlag))
+	}
+	switch {
+	case g.MaxUtilisation >= 1:
+		w = append(w, fmt.Sprintf("OVERSTRESSED: %s in case %q at %.0f %% of its strength", g.MaxUtilisationMember, g.MaxUtilisationCase, 100*g.MaxUtilisation))
+	case g.MaxUtilisation >= utilisationFlag:
+		w = append(w, fmt.Sprintf("HIGH UTILISATION: %s in case %q at %.0f %% of its strength", g.MaxUtilisationMember, g.MaxUtilisationCase, 100*g.MaxUtilisation))
+	}
+	return w
+}
+
+func join(s []string) string {
+	out := ""
+	for i, x := range s {
+		if i > 0 {
+			out += ", "
+		}
+		out += x
+	}
+	return out
+}

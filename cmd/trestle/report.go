@@ -1,0 +1,197 @@
+package main
+
+import (
+	"encoding/json"
+	"fmt"
+	"io"
+	"math"
+	"strings"
+	"text/tabwriter"
+)
+
+// writeJSON writes v indented, with a final newline.
+func writeJSON(w io.Writer, v any) error {
+	enc := json.NewEncoder(w)
+	enc.SetIndent("", "  ")
+	enc.SetEscapeHTML(false)
+	return enc.Encode(v)
+}
+
+// table is a tabwriter for aligned columns, two spaces apart.
+func table(w io.Writer) *tabwriter.Writer { return tabwriter.NewWriter(w, 0, 0, 2, ' ', 0) }
+
+// heading prints a section heading.
+func heading(w io.Writer, s string) {
+	fmt.Fprintf(w, "\n%s\n%s\n", s, strings.Repeat("─", len([]rune(s))))
+}
+
+// direction words a unit vector: the axis it is close to, else its
+// components.
+func direction(d [3]float64) string {
+	names := [3]string{"X", "Y", "Z"}
+	for i, v := range d {
+		if math.Abs(v) > 0.995 {
+			return names[i]
+		}
+	}
+	return fmt.Sprintf("(%.2f, %.2f, %.2f)", d[0], d[1], d[2])
+}
+
+// writeCautions ends every report.
+func writeCautions(w io.Writer) {
+	heading(w, "CAUTIONS")
+	for _, c := range cautions {
+		fmt.Fprintf(w, "  • %s\n", c)
+	}
+}
+
+// writeAnalysis prints an analysis report as text: governing numbers,
+// warnings, then the details per mount and per case, then the cautions.
+func writeAnalysis(w io.Writer, r *AnalysisReport, u unitSystem) {
+	k, mo, f, s := u.stiffness(), u.motion(), u.force(), u.stress()
+	fmt.Fprintf(w, "trestle analysis: %s (material level %s)\n", r.Model, r.Level)
+	sm := r.Summary
+	fmt.Fprintf(w, "%d nodes, %d beams, %d bars, %d springs, %d feet, %d rigid groups, %d mounts, %d load cases; weight on the floor %s\n",
+		sm.Nodes, sm.Beams, sm.Bars, sm.Springs, sm.Feet, sm.Groups, sm.Mounts, sm.Cases, f.fu(sm.WeightN))
+
+	if len(r.Warnings) > 0 {
+		heading(w, "WARNINGS")
+		for _, x := range r.Warnings {
+			fmt.Fprintf(w, "  ! %s\n", x)
+		}
+	}
+
+	g := r.Governing
+	heading(w, "GOVERNING NUMBERS")
+	tw := table(w)
+	if g.SoftestMount != "" {
+		fmt.Fprintf(tw, "  softest mount stiffness\t%s\tat %s, along %s\n", k.fu(g.SoftestStiffnessNPerM), g.SoftestMount, direction(g.SoftestDirection))
+	} else {
+		fmt.Fprintf(tw, "  softest mount stiffness\t—\tno mounts or rigid groups in the model\n")
+	}
+	if g.FirstFrequencyHz != nil {
+		fmt.Fprintf(tw, "  first natural frequency\t%s Hz\t\n", num(*g.FirstFrequencyHz))
+	} else {
+		fmt.Fprintf(tw, "  first natural frequency\t—\tnot available in this build\n")
+	}
+	if g.MaxUtilisationMember != "" {
+		fmt.Fprintf(tw, "  highest utilisation\t%s\t%s in case %q\n", pct(g.MaxUtilisation), g.MaxUtilisationMember, g.MaxUtilisationCase)
+	} else {
+		fmt.Fprintf(tw, "  highest utilisation\t—\tno rated member\n")
+	}
+	if g.BucklingFactor != nil {
+		fmt.Fprintf(tw, "  buckling factor\t%s\tcase %q\n", num(*g.BucklingFactor), g.BucklingCase)
+	} else {
+		fmt.Fprintf(tw, "  buckling factor\t—\tnot available in this build\n")
+	}
+	fmt.Fprintf(tw, "  largest displacement\t%s\tat %s in case %q\n", mo.fu(g.MaxDisplacementM), g.MaxDisplacementNode, g.MaxDisplacementCase)
+	switch {
+	case len(g.LiftedFeet) > 0:
+		fmt.Fprintf(tw, "  feet\tLIFTED\t%s\n", join(g.LiftedFeet))
+	case len(g.UpliftFeet) > 0:
+		fmt.Fprintf(tw, "  feet\tUPLIFT\t%s\n", join(g.UpliftFeet))
+	case r.Summary.Feet > 0:
+		fmt.Fprintf(tw, "  feet\tall in contact\tno uplift in any case\n")
+	}
+	if g.TippingFactor != nil {
+		fmt.Fprintf(tw, "  tipping margin\t%s ×\tthe non-gravity loads of case %q tip the stand\n", fixed(*g.TippingFactor, 2), g.TippingCase)
+	} else if r.Summary.Feet > 0 {
+		fmt.Fprintf(tw, "  tipping margin\t—\tno case's loads can tip the stand\n")
+	}
+	tw.Flush()
+
+	if len(r.Mounts) > 0 {
+		heading(w, fmt.Sprintf("MOUNT STIFFNESS [%s], rotation free", k.unit))
+		tw = table(w)
+		fmt.Fprintf(tw, "  mount\tX\tY\tZ\tsoftest\talong\tstiffest\talong\n")
+		for _, mt := range r.Mounts {
+			fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n", mt.Name, k.f(mt.XNPerM), k.f(mt.YNPerM), k.f(mt.ZNPerM),
+				k.f(mt.PrincipalNPerM[0]), direction(mt.PrincipalDirection[0]), k.f(mt.PrincipalNPerM[2]), direction(mt.PrincipalDirection[2]))
+		}
+		tw.Flush()
+	}
+	if r.Modes != nil {
+		heading(w, "MODES")
+		tw = table(w)
+		fmt.Fprintf(tw, "  mode\tf [Hz]\tloss factor η\tdamping ratio ζ\n")
+		for _, md := range r.Modes.Modes {
+			fmt.Fprintf(tw, "  %d\t%s\t%s\t%s\n", md.Number, num(md.FrequencyHz), num(md.LossFactor), num(md.Ratio))
+		}
+		tw.Flush()
+	}
+
+	for _, c := range r.Cases {
+		kind := "LOAD CASE"
+		if c.Combination {
+			kind = "COMBINATION"
+		}
+		heading(w, fmt.Sprintf("%s %q", kind, c.Name))
+		fmt.Fprintf(w, "  largest displacement %s at %s", mo.fu(c.MaxDisplacementM), c.MaxDisplacementNode)
+		if c.MaxUtilisationMember != "" {
+			fmt.Fprintf(w, "; highest utilisation %s (%s)", pct(c.MaxUtilisation), c.MaxUtilisationMember)
+		}
+		fmt.Fprintln(w)
+		switch {
+		case c.Tipping.Found:
+			fmt.Fprintf(w, "  tipping margin %s × the non-gravity loads (last foot to carry: %s)\n", fixed(c.Tipping.Factor, 2), c.Tipping.LastFoot)
+		}
+		if len(c.Feet) > 0 {
+			fmt.Fprintf(w, "\n  Feet (force from the floor on the stand, FZ up) [%s]\n", f.unit)
+			tw = table(w)
+			fmt.Fprintf(tw, "  foot\tnode\tFZ\tshare\tFX\tFY\tstate\n")
+			for _, ft := range c.Feet {
+				state := "in contact"
+				switch {
+				case ft.Lifted:
+					state = "LIFTED"
+				case ft.Uplift:
+					state = "UPLIFT (tension)"
+				}
+				fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\t%s\t%s\t%s\n", ft.Name, ft.Node, f.f(ft.FZN), pct(ft.Share), f.f(ft.FXN), f.f(ft.FYN), state)
+			}
+			tw.Flush()
+		}
+		if len(c.Supports) > 0 {
+			fmt.Fprintf(w, "\n  Supports (reaction on the stand) [%s, %s]\n", f.unit, u.moment().unit)
+			tw = table(w)
+			fmt.Fprintf(tw, "  node\tFX\tFY\tFZ\tMX\tMY\tMZ\n")
+			for _, sp := range c.Supports {
+				mm := u.moment()
+				fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\t%s\t%s\t%s\n", sp.Node, f.f(sp.FXN), f.f(sp.FYN), f.f(sp.FZN), mm.f(sp.MXNm), mm.f(sp.MYNm), mm.f(sp.MZNm))
+			}
+			tw.Flush()
+		}
+		if len(c.Mounts) > 0 {
+			fmt.Fprintf(w, "\n  Mount motion [%s]\n", mo.unit)
+			tw = table(w)
+			fmt.Fprintf(tw, "  mount\tUX\tUY\tUZ\n")
+			for _, mm := range c.Mounts {
+				fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\n", mm.Name, mo.f(mm.UXM), mo.f(mm.UYM), mo.f(mm.UZM))
+			}
+			tw.Flush()
+		}
+		if len(c.Members) > 0 {
+			fmt.Fprintf(w, "\n  Members (axial force tension +) [%s, %s]\n", f.unit, s.unit)
+			tw = table(w)
+			fmt.Fprintf(tw, "  member\tkind\taxial\tstress\tutilisation\n")
+			for _, mb := range c.Members {
+				ut := "not rated"
+				if mb.Rated {
+					ut = pct(mb.Utilisation)
+				}
+				fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\t%s\n", mb.Name, mb.Kind, f.f(mb.AxialN), s.f(mb.StressPa), ut)
+			}
+			tw.Flush()
+		}
+		eq := c.Equilibrium
+		fmt.Fprintf(w, "\n  Check: applied FZ %s, reactions FZ %s; equilibrium error force %.1e, moment %.1e; solve residual %.1e\n",
+			f.fu(eq.AppliedN[2]), f.fu(eq.ReactionsN[2]), eq.ForceError, eq.MomentError, c.Residual)
+	}
+	if len(r.Pending) > 0 {
+		heading(w, "NOT IN THIS REPORT")
+		for _, p := range r.Pending {
+			fmt.Fprintf(w, "  – %s\n", p)
+		}
+	}
+	writeCautions(w)
+}

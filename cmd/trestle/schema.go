@@ -1,0 +1,306 @@
+package main
+
+// JSON reports. Every report carries a "schema" field naming its kind and
+// version; numbers are SI base units whatever --units says, and field
+// names carry the unit. SCHEMA.md documents each field. A change that
+// removes or renames a field, or changes its meaning, bumps the version.
+
+// Schema versions of the JSON reports.
+const (
+	schemaAnalysis = "trestle.analysis/1"
+	schemaRanges   = "trestle.ranges/1"
+	schemaCompare  = "trestle.compare/1"
+	schemaRingdown = "trestle.ringdown/1"
+	schemaMaterial = "trestle.materials/1"
+	schemaSections = "trestle.sections/1"
+	schemaSection  = "trestle.section/1"
+)
+
+// AnalysisReport is the JSON form of `trestle analyse` and `trestle demo`.
+type AnalysisReport struct {
+	Schema    string           `json:"schema"`
+	Model     string           `json:"model"`
+	Level     string           `json:"level"` // material level: low, nominal or high
+	Summary   ModelSummary     `json:"summary"`
+	Governing Governing        `json:"governing"`
+	Warnings  []string         `json:"warnings"`
+	Mounts    []MountStiffness `json:"mounts"`
+	Cases     []CaseReport     `json:"cases"`
+	Buckling  *BucklingReport  `json:"buckling,omitempty"`
+	Modes     *ModesReport     `json:"modes,omitempty"`
+	Pending   []string         `json:"pending"` // analyses this build cannot run yet
+	Cautions  []string         `json:"cautions"`
+}
+
+// ModelSummary counts what the model holds.
+type ModelSummary struct {
+	Nodes   int     `json:"nodes"`
+	Bars    int     `json:"bars"`
+	Beams   int     `json:"beams"`
+	Springs int     `json:"springs"`
+	Feet    int     `json:"feet"`
+	Groups  int     `json:"rigid_groups"`
+	Mounts  int     `json:"mounts"`
+	Cases   int     `json:"cases"`
+	WeightN float64 `json:"weight_n"` // total weight carried by feet and supports in the first case with gravity; 0 if none
+}
+
+// Governing holds the numbers a designer reads first. Optional numbers are
+// null when the analysis is not available or does not apply.
+type Governing struct {
+	SoftestMount          string     `json:"softest_mount"`
+	SoftestStiffnessNPerM float64    `json:"softest_stiffness_n_per_m"`
+	SoftestDirection      [3]float64 `json:"softest_direction"` // unit vector, global X, Y, Z
+	FirstFrequencyHz      *float64   `json:"first_frequency_hz"`
+	MaxUtilisation        float64    `json:"max_utilisation"`
+	MaxUtilisationMember  string     `json:"max_utilisation_member"`
+	MaxUtilisationCase    string     `json:"max_utilisation_case"`
+	BucklingFactor        *float64   `json:"buckling_factor"`
+	BucklingCase          string     `json:"buckling_case,omitempty"`
+	MaxDisplacementM      float64    `json:"max_displacement_m"`
+	MaxDisplacementNode   string     `json:"max_displacement_node"`
+	MaxDisplacementCase   string     `json:"max_displacement_case"`
+	LiftedFeet            []string   `json:"lifted_feet"`    // "foot (case)"
+	UpliftFeet            []string   `json:"uplift_feet"`    // bolted feet in tension: "foot (case)"
+	TippingFactor         *float64   `json:"tipping_factor"` // smallest over cases; null if no case can tip
+	TippingCase           string     `json:"tipping_case,omitempty"`
+}
+
+// MountStiffness is the static stiffness felt at one mount (or rigid
+// group, or node) with its rotation free.
+type MountStiffness struct {
+	Name               string        `json:"name"`
+	XNPerM             float64       `json:"x_n_per_m"` // along global X
+	YNPerM             float64       `json:"y_n_per_m"`
+	ZNPerM             float64       `json:"z_n_per_m"`
+	PrincipalNPerM     [3]float64    `json:"principal_n_per_m"`   // ascending
+	PrincipalDirection [3][3]float64 `json:"principal_direction"` // unit vectors, one per principal stiffness
+}
+
+// CaseReport holds the static results of one load case or combination.
+type CaseReport struct {
+	Name                 string            `json:"name"`
+	Combination          bool              `json:"combination"`
+	MaxDisplacementM     float64           `json:"max_displacement_m"`
+	MaxDisplacementNode  string            `json:"max_displacement_node"`
+	MaxUtilisation       float64           `json:"max_utilisation"`
+	MaxUtilisationMember string            `json:"max_utilisation_member"`
+	Feet                 []FootReport      `json:"feet"`
+	Supports             []SupportReport   `json:"supports"`
+	Members              []MemberReport    `json:"members"`
+	Mounts               []MountMotion     `json:"mounts"`
+	Equilibrium          EquilibriumReport `json:"equilibrium"`
+	Residual             float64           `json:"residual"` // relative ‖K·u − f‖/‖f‖
+	Tipping              TippingReport     `json:"tipping"`
+}
+
+// FootReport is the reaction at one foot: the force the floor exerts on
+// the stand (FZ positive when the foot presses on the floor).
+type FootReport struct {
+	Name   string  `json:"name"`
+	Node   string  `json:"node"`
+	FXN    float64 `json:"fx_n"`
+	FYN    float64 `json:"fy_n"`
+	FZN    float64 `json:"fz_n"`
+	Share  float64 `json:"share"`  // FZ over the sum of FZ of all feet
+	Uplift bool    `json:"uplift"` // the foot pulls the stand down (needs an anchor)
+	Lifted bool    `json:"lifted"` // a loose foot out of contact
+}
+
+// SupportReport is the reaction at a fixed node (a rigid support).
+type SupportReport struct {
+	Node string  `json:"node"`
+	FXN  float64 `json:"fx_n"`
+	FYN  float64 `json:"fy_n"`
+	FZN  float64 `json:"fz_n"`
+	MXNm float64 `json:"mx_nm"`
+	MYNm float64 `json:"my_nm"`
+	MZNm float64 `json:"mz_nm"`
+}
+
+// MemberReport is the force state of one bar, beam or spring.
+type MemberReport struct {
+	Name        string  `json:"name"`
+	Kind        string  `json:"kind"`        // bar, beam, spring
+	AxialN      float64 `json:"axial_n"`     // tension positive
+	StressPa    float64 `json:"stress_pa"`   // axial stress; 0 when the area is unknown
+	Utilisation float64 `json:"utilisation"` // 0 when not rated
+	Rated       bool    `json:"rated"`       // a utilisation was computed
+}
+
+// MountMotion is the displacement of a mount in one case.
+type MountMotion struct {
+	Name string  `json:"name"`
+	UXM  float64 `json:"ux_m"`
+	UYM  float64 `json:"uy_m"`
+	UZM  float64 `json:"uz_m"`
+}
+
+// EquilibriumReport compares applied loads and reactions.
+type EquilibriumReport struct {
+	AppliedN    [3]float64 `json:"applied_n"`
+	ReactionsN  [3]float64 `json:"reactions_n"`
+	ForceError  float64    `json:"force_error"`  // relative
+	MomentError float64    `json:"moment_error"` // relative
+}
+
+// TippingReport is the tipping margin of a case on loose feet.
+type TippingReport struct {
+	Found    bool    `json:"found"`  // some factor on the non-gravity loads tips the stand
+	Factor   float64 `json:"factor"` // that factor; 0 when not found
+	LastFoot string  `json:"last_foot,omitempty"`
+}
+
+// BucklingReport holds the lowest buckling load factors.
+type BucklingReport struct {
+	Case    string    `json:"case"`
+	Factors []float64 `json:"factors"`
+}
+
+// ModesReport holds natural frequencies and modal damping.
+type ModesReport struct {
+	Modes []ModeReport `json:"modes"`
+}
+
+// ModeReport is one natural mode.
+type ModeReport struct {
+	Number      int     `json:"number"`
+	FrequencyHz float64 `json:"frequency_hz"`
+	LossFactor  float64 `json:"loss_factor,omitempty"`
+	Ratio       float64 `json:"damping_ratio,omitempty"`
+	Description string  `json:"description,omitempty"`
+}
+
+// RangesReport is the JSON form of `trestle ranges`.
+type RangesReport struct {
+	Schema   string        `json:"schema"`
+	Model    string        `json:"model"`
+	Levels   []LevelReport `json:"levels"` // low, nominal, high
+	Pending  []string      `json:"pending"`
+	Cautions []string      `json:"cautions"`
+}
+
+// LevelReport is the governing numbers at one material level.
+type LevelReport struct {
+	Level     string           `json:"level"`
+	Governing Governing        `json:"governing"`
+	Mounts    []MountStiffness `json:"mounts"`
+}
+
+// CompareReport is the JSON form of `trestle compare`.
+type CompareReport struct {
+	Schema     string           `json:"schema"`
+	A          string           `json:"a"`
+	B          string           `json:"b"`
+	GoverningA Governing        `json:"governing_a"`
+	GoverningB Governing        `json:"governing_b"`
+	MountsA    []MountStiffness `json:"mounts_a"`
+	MountsB    []MountStiffness `json:"mounts_b"`
+	Cautions   []string         `json:"cautions"`
+}
+
+// RingdownReport is the JSON form of `trestle ringdown`.
+type RingdownReport struct {
+	Schema           string         `json:"schema"`
+	Input            string         `json:"input"`
+	Column           string         `json:"column"`
+	SampleRateHz     float64        `json:"sample_rate_hz"`
+	Samples          int            `json:"samples"`
+	DampedFrequency  Estimate       `json:"damped_frequency_hz"`
+	NaturalFrequency Estimate       `json:"natural_frequency_hz"`
+	Ratio            Estimate       `json:"damping_ratio"`
+	LogDecrement     Estimate       `json:"log_decrement"`
+	LossFactor       Estimate       `json:"loss_factor"`
+	Q                Estimate       `json:"q"`
+	SpecificCapacity Estimate       `json:"specific_damping_capacity"`
+	WindowS          [2]float64     `json:"window_s"`
+	Cycles           float64        `json:"cycles"`
+	Nominal          string         `json:"nominal_method"`
+	Methods          []MethodReport `json:"methods"`
+	AgreementFactor  float64        `json:"agreement_factor"` // largest over smallest ζ among the methods
+	AgreementLimit   float64        `json:"agreement_limit"`
+	Agree            bool           `json:"agree"`
+	Warnings         []string       `json:"warnings"`
+	Notes            []string       `json:"notes"` // what the reader decided
+	Picture          string         `json:"picture,omitempty"`
+}
+
+// Estimate is a value with its standard uncertainty.
+type Estimate struct {
+	Value       float64 `json:"value"`
+	Uncertainty float64 `json:"uncertainty"`
+}
+
+// MethodReport is one method's estimate in a ring-down reduction.
+type MethodReport struct {
+	Method          string   `json:"method"`
+	OK              bool     `json:"ok"`
+	DampedFrequency Estimate `json:"damped_frequency_hz"`
+	Ratio           Estimate `json:"damping_ratio"`
+	Cycles          float64  `json:"cycles"`
+	Note            string   `json:"note"`
+}
+
+// MaterialsReport is the JSON form of `trestle materials`.
+type MaterialsReport struct {
+	Schema    string           `json:"schema"`
+	Materials []MaterialReport `json:"materials"`
+}
+
+// MaterialReport is one catalogue material.
+type MaterialReport struct {
+	Name          string         `json:"name"`
+	Kind          string         `json:"kind"`
+	EPa           [3]float64     `json:"e_pa"` // low, nominal, high
+	DensityKgM3   float64        `json:"density_kg_m3"`
+	YieldPa       float64        `json:"yield_pa"`       // 0: not rated
+	CompressivePa float64        `json:"compressive_pa"` // 0: not rated
+	LossFactor    [3]float64     `json:"loss_factor"`    // low, nominal, high
+	Spread        string         `json:"spread,omitempty"`
+	Sources       []SourceReport `json:"sources,omitempty"`
+}
+
+// SourceReport names where one figure came from.
+type SourceReport struct {
+	Figure string `json:"figure"`
+	Ref    string `json:"ref"`
+}
+
+// SectionsReport is the JSON form of `trestle sections`.
+type SectionsReport struct {
+	Schema string        `json:"schema"`
+	Kinds  []SectionKind `json:"kinds"`
+}
+
+// SectionKind is one shape keyword.
+type SectionKind struct {
+	Name        string `json:"name"`
+	Description string `json:"description"`
+	Example     string `json:"example"`
+}
+
+// SectionReport is the JSON form of `trestle sections SPEC`.
+type SectionReport struct {
+	Schema string        `json:"schema"`
+	Spec   string        `json:"spec"`
+	AM2    float64       `json:"a_m2"`
+	IyM4   float64       `json:"iy_m4"`
+	IzM4   float64       `json:"iz_m4"`
+	IyzM4  float64       `json:"iyz_m4"`
+	JM4    float64       `json:"j_m4"`
+	AsYM2  float64       `json:"asy_m2"`
+	AsZM2  float64       `json:"asz_m2"`
+	SyM3   float64       `json:"sy_m3"`
+	SzM3   float64       `json:"sz_m3"`
+	RyM    float64       `json:"ry_m"`
+	RzM    float64       `json:"rz_m"`
+	Parts  []SectionPart `json:"parts,omitempty"`
+}
+
+// SectionPart is one material's share of a composite section.
+type SectionPart struct {
+	Material string  `json:"material"`
+	AM2      float64 `json:"a_m2"`
+	IyM4     float64 `json:"iy_m4"`
+	IzM4     float64 `json:"iz_m4"`
+}
