@@ -1,48 +1,43 @@
 package sparse
 
-import (
-	"gonum.org/v1/gonum/blas"
-	"gonum.org/v1/gonum/blas/blas64"
-)
 
 // Dense kernels on row-major blocks: element (i, j) of a block with
 // leading dimension ld is x[i*ld+j].
 
 // smallGemm is the flop count below which gemmNT uses plain loops rather
-// than the BLAS call (whose set-up costs more than the work).
-const smallGemm = 8 * 1024
+// than the packed multiply (whose packing costs more than it saves).
+const smallGemm = 4 * 1024
 
-// gemmNT sets C -= A·Bᵀ for A (r×k, lda), B (c×k, ldb), C (r×c, ldc).
-func gemmNT(r, c, k int, a []float64, lda int, b []float64, ldb int, cc []float64, ldc int) {
+// gemmNT sets C −= A·Bᵀ for A (r×k, lda), B (c×k, ldb), C (r×c, ldc);
+// with lower set, only entries j ≤ i are required (others may be junk).
+func (w *gemmWork) gemmNT(r, c, k int, a []float64, lda int, b []float64, ldb int, cc []float64, ldc int, lower bool) {
 	if r == 0 || c == 0 || k == 0 {
 		return
 	}
-	if r*c*k < smallGemm {
-		for i := 0; i < r; i++ {
-			ai := a[i*lda : i*lda+k]
-			ci := cc[i*ldc : i*ldc+c]
-			for j := range ci {
-				bj := b[j*ldb : j*ldb+k]
-				s := 0.0
-				for t, v := range ai {
-					s += v * bj[t]
-				}
-				ci[j] -= s
-			}
-		}
+	if r*c*k >= smallGemm {
+		w.gemmPacked(r, c, k, a, lda, b, ldb, cc, ldc, lower)
 		return
 	}
-	blas64.Gemm(blas.NoTrans, blas.Trans, -1,
-		blas64.General{Rows: r, Cols: k, Stride: lda, Data: a[:(r-1)*lda+k]},
-		blas64.General{Rows: c, Cols: k, Stride: ldb, Data: b[:(c-1)*ldb+k]},
-		1, blas64.General{Rows: r, Cols: c, Stride: ldc, Data: cc[:(r-1)*ldc+c]})
+	for i := 0; i < r; i++ {
+		ai := a[i*lda : i*lda+k]
+		nj := c
+		if lower {
+			nj = min(c, i+1)
+		}
+		ci := cc[i*ldc : i*ldc+nj]
+		for j := range ci {
+			bj := b[j*ldb : j*ldb+k]
+			s := 0.0
+			for t, v := range ai {
+				s += v * bj[t]
+			}
+			ci[j] -= s
+		}
+	}
 }
 
 // panelWidth is the number of pivots factorised together in partialLDLT.
 const panelWidth = 64
-
-// schurRows is the height of the row blocks of the Schur complement update.
-const schurRows = 256
 
 // partialLDLT eliminates the first k of the m rows/columns of the
 // symmetric front f (lower triangle, row-major, leading dimension m):
@@ -51,7 +46,7 @@ const schurRows = 256
 // complement. w must hold at least max(panelWidth², k·panelWidth, (m−k)·k) values.
 // Each pivot j is checked by pc.checkPivot(c0+j, ·); an error stops the
 // factorisation.
-func partialLDLT(f []float64, m, k int, d, w []float64, pc *Factor, c0 int) error {
+func partialLDLT(f []float64, m, k int, d, w []float64, gw *gemmWork, pc *Factor, c0 int) error {
 	ld := m
 	for p0 := 0; p0 < k; p0 += panelWidth {
 		p1 := min(p0+panelWidth, k)
@@ -111,13 +106,7 @@ func partialLDLT(f []float64, m, k int, d, w []float64, pc *Factor, c0 int) erro
 				dst[c] = v * d[p0+c]
 			}
 		}
-		for r0 := p1; r0 < k; r0 += schurRows {
-			r1 := min(r0+schurRows, k)
-			gemmNT(r1-r0, r1-p1, pb, f[r0*ld+p0:], ld, wp, pb, f[r0*ld+p1:], ld)
-		}
-		if m > k {
-			gemmNT(m-k, nk, pb, f[k*ld+p0:], ld, wp, pb, f[k*ld+p1:], ld)
-		}
+		gw.gemmNT(m-p1, nk, pb, f[p1*ld+p0:], ld, wp, pb, f[p1*ld+p1:], ld, true)
 	}
 	// Schur complement: F22 -= L21·D·L21ᵀ (lower triangle, row blocks).
 	u := m - k
@@ -132,9 +121,6 @@ func partialLDLT(f []float64, m, k int, d, w []float64, pc *Factor, c0 int) erro
 			dst[c] = v * d[c]
 		}
 	}
-	for r0 := 0; r0 < u; r0 += schurRows {
-		r1 := min(r0+schurRows, u)
-		gemmNT(r1-r0, r1, k, f[(k+r0)*ld:], ld, w2, k, f[(k+r0)*ld+k:], ld)
-	}
+	gw.gemmNT(u, u, k, f[k*ld:], ld, w2, k, f[k*ld+k:], ld, true)
 	return nil
 }

@@ -107,6 +107,7 @@ type Factor struct {
 	front   []float64
 	stack   []float64
 	work    []float64
+	gw      *gemmWork
 	y       []float64
 	ok      bool
 	neg     int
@@ -302,6 +303,9 @@ func (f *Factor) analyzePerm(a *Matrix, perm0 []int) error {
 	f.front = make([]float64, f.frontMx)
 	f.stack = make([]float64, stackMax)
 	f.work = make([]float64, maxWork)
+	if f.gw == nil {
+		f.gw = newGemmWork()
+	}
 	f.y = make([]float64, n)
 	return nil
 }
@@ -367,7 +371,7 @@ func (f *Factor) Factorize(a *Matrix) error {
 			}
 		}
 		// Partial factorisation with the pivot test on original diagonals.
-		if err := partialLDLT(fr, m, k, f.d[c0:c1], f.work, f, c0); err != nil {
+		if err := partialLDLT(fr, m, k, f.d[c0:c1], f.work, f.gw, f, c0); err != nil {
 			return err
 		}
 		// Keep L's columns; push the update matrix.

@@ -1,0 +1,127 @@
+package sparse
+
+// Packed matrix multiply for the dense kernels: C −= A·Bᵀ on row-major
+// blocks, in the blocking scheme of Goto and van de Geijn ("Anatomy of
+// high-performance matrix multiplication", ACM TOMS 34(3), 2008) with a
+// 4×8 register tile.
+
+const (
+	gemmKC = 256  // depth of a packed panel
+	gemmMC = 128  // rows of A packed at a time
+	gemmNC = 2048 // rows of B packed at a time
+)
+
+// gemmWork is the packing workspace of one goroutine.
+type gemmWork struct {
+	ap, bp []float64
+	tile   [32]float64
+}
+
+func newGemmWork() *gemmWork {
+	return &gemmWork{ap: make([]float64, gemmMC*gemmKC), bp: make([]float64, gemmNC*gemmKC)}
+}
+
+// kern4x8go is the portable 4×8 tile kernel.
+func kern4x8go(k int, a, b, c []float64, ldc int) {
+	var acc [4][8]float64
+	for t := 0; t < k; t++ {
+		at := a[4*t : 4*t+4]
+		bt := b[8*t : 8*t+8]
+		for i := 0; i < 4; i++ {
+			ai := at[i]
+			r := &acc[i]
+			for j := 0; j < 8; j++ {
+				r[j] += ai * bt[j]
+			}
+		}
+	}
+	for i := 0; i < 4; i++ {
+		ci := c[i*ldc : i*ldc+8]
+		for j := range ci {
+			ci[j] -= acc[i][j]
+		}
+	}
+}
+
+// gemmPacked sets C −= A·Bᵀ for A (r×k), B (c×k), C (r×c). With lower
+// set, only the tiles that reach the lower triangle (j ≤ i) are computed;
+// entries above the diagonal may then be overwritten with junk.
+func (w *gemmWork) gemmPacked(r, c, k int, a []float64, lda int, b []float64, ldb int, cc []float64, ldc int, lower bool) {
+	for jc := 0; jc < c; jc += gemmNC {
+		nc := min(gemmNC, c-jc)
+		if lower && jc >= r {
+			break
+		}
+		for kc0 := 0; kc0 < k; kc0 += gemmKC {
+			kc := min(gemmKC, k-kc0)
+			// Pack B[jc:jc+nc, kc0:kc0+kc] in strips of 8 rows.
+			nstripB := (nc + 7) / 8
+			for s := 0; s < nstripB; s++ {
+				dst := w.bp[s*8*kc : (s+1)*8*kc]
+				j0 := jc + 8*s
+				nj := min(8, jc+nc-j0)
+				for jj := 0; jj < nj; jj++ {
+					src := b[(j0+jj)*ldb+kc0 : (j0+jj)*ldb+kc0+kc]
+					for t, v := range src {
+						dst[8*t+jj] = v
+					}
+				}
+				for jj := nj; jj < 8; jj++ {
+					for t := 0; t < kc; t++ {
+						dst[8*t+jj] = 0
+					}
+				}
+			}
+			i0 := 0
+			if lower {
+				i0 = jc / 4 * 4 // rows above jc have no lower-triangle tile here
+			}
+			for ic := i0; ic < r; ic += gemmMC {
+				mc := min(gemmMC, r-ic)
+				nstripA := (mc + 3) / 4
+				for s := 0; s < nstripA; s++ {
+					dst := w.ap[s*4*kc : (s+1)*4*kc]
+					ia := ic + 4*s
+					ni := min(4, ic+mc-ia)
+					for ii := 0; ii < ni; ii++ {
+						src := a[(ia+ii)*lda+kc0 : (ia+ii)*lda+kc0+kc]
+						for t, v := range src {
+							dst[4*t+ii] = v
+						}
+					}
+					for ii := ni; ii < 4; ii++ {
+						for t := 0; t < kc; t++ {
+							dst[4*t+ii] = 0
+						}
+					}
+				}
+				for sb := 0; sb < nstripB; sb++ {
+					j0 := jc + 8*sb
+					nj := min(8, jc+nc-j0)
+					bs := w.bp[sb*8*kc : (sb+1)*8*kc]
+					for sa := 0; sa < nstripA; sa++ {
+						ia := ic + 4*sa
+						if lower && j0 > ia+3 {
+							continue
+						}
+						ni := min(4, ic+mc-ia)
+						as := w.ap[sa*4*kc : (sa+1)*4*kc]
+						if ni == 4 && nj == 8 {
+							kern4x8(kc, as, bs, cc[ia*ldc+j0:], ldc)
+							continue
+						}
+						t := w.tile[:]
+						clear(t)
+						kern4x8(kc, as, bs, t, 8)
+						for ii := 0; ii < ni; ii++ {
+							row := cc[(ia+ii)*ldc+j0 : (ia+ii)*ldc+j0+nj]
+							for jj := range row {
+								row[jj] += t[ii*8+jj]
+							}
+						}
+					}
+				}
+			}
+		}
+	}
+}
