@@ -111,6 +111,17 @@ func (nt *net) elemStiffness(i int, k *[12][12]float64, dofs *[12]edof) int {
 // first) and returns it. Every equation gets an explicit diagonal entry so
 // the pattern is the same whatever the values.
 func (nt *net) assemble(b *sparse.Builder) *sparse.Matrix {
+	return nt.assembleWith(b, nt.elemStiffness, nil)
+}
+
+// elemMatrix writes one element's matrix over its DOF list and returns the
+// list's length.
+type elemMatrix func(i int, k *[12][12]float64, dofs *[12]edof) int
+
+// assembleWith assembles the element matrices given by fn, plus for each
+// owner the 6×6 block of extra (if not nil; about the owner's reference
+// point), through the rigid-group transformation.
+func (nt *net) assembleWith(b *sparse.Builder, fn elemMatrix, extra [][6][6]float64) *sparse.Matrix {
 	d := &nt.dm
 	b.Reset(d.n)
 	for i := 0; i < d.n; i++ {
@@ -121,7 +132,7 @@ func (nt *net) assemble(b *sparse.Builder) *sparse.Matrix {
 	var tbuf [12][3]term
 	var ts [12][]term
 	for i := range nt.m.elems {
-		nd := nt.elemStiffness(i, &k, &dofs)
+		nd := fn(i, &k, &dofs)
 		keepZeros := nt.m.elems[i].kind == FootKind
 		for a := 0; a < nd; a++ {
 			ts[a] = d.nodeTerms(dofs[a].n, dofs[a].c, nt.m.nodes[dofs[a].n].at, &tbuf[a])
@@ -138,6 +149,16 @@ func (nt *net) assemble(b *sparse.Builder) *sparse.Matrix {
 							b.Add(ta.eq, tb.eq, v*ta.coef*tb.coef)
 						}
 					}
+				}
+			}
+		}
+	}
+	for o, blk := range extra {
+		eq := d.ownerEq[o]
+		for r := 0; r < 6; r++ {
+			for c := 0; c <= r; c++ {
+				if blk[r][c] != 0 && eq[r] >= 0 && eq[c] >= 0 {
+					b.Add(eq[r], eq[c], blk[r][c])
 				}
 			}
 		}

@@ -112,6 +112,7 @@ type RawBeam struct {
 type memberProps struct {
 	ea, eiy, eiz, gj, gasy, gasz float64
 	lineMass                     float64
+	polarMass                    float64 // ρ·(Iy+Iz) per length [kg·m]
 	area                         float64 // for stress; 0: unknown
 	// parts for stress and utilisation: modulus and strength per part
 	parts []partStrength
@@ -140,6 +141,7 @@ func resolveMember(mat materials.Material, sec sections.Section, raw RawBeam, l 
 		}
 		for _, pt := range parts {
 			mp.lineMass += pt.Material.Density * pt.A
+			mp.polarMass += pt.Material.Density * (pt.Iy + pt.Iz)
 			if pt.Material.MassOnly {
 				continue
 			}
@@ -168,7 +170,7 @@ func resolveMember(mat materials.Material, sec sections.Section, raw RawBeam, l 
 	e := mat.E.At(l)
 	g := mat.ShearModulus(l)
 	mp = memberProps{ea: e * p.A, eiy: e * p.Iy, eiz: e * p.Iz, gj: g * p.J,
-		lineMass: mat.Density * p.A, area: p.A,
+		lineMass: mat.Density * p.A, polarMass: mat.Density * (p.Iy + p.Iz), area: p.A,
 		parts: []partStrength{{e: e, tens: mat.Yield, comp: mat.CompressiveStrength()}}}
 	if needShear {
 		mp.gasy, mp.gasz = g*p.AsY, g*p.AsZ

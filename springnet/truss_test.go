@@ -214,3 +214,48 @@ func TestUnits(t *testing.T) {
 	assert.InEpsilon(t, 1.0, springnet.LbfPerInch(springnet.FromLbfPerInch(1)), 1e-15)
 	assert.InEpsilon(t, 2.34e3, springnet.NPerMicron(2.34e9), 1e-15)
 }
+
+func TestLumpedMassTotal(t *testing.T) {
+	// The mass matrix applied to a unit rigid translation gives the total
+	// mass: Σ ρ·A·L over members plus the added masses (conservation of
+	// mass; the lumped matrix keeps it exactly).
+	steel := materials.Material{Name: "steel", E: materials.Exact(200e9), Poisson: 0.3, Density: 7850}
+	sec := sections.Square{B: 0.04}
+	var m springnet.Model
+	a := m.AddNode("a", springnet.Vec{})
+	b := m.AddNode("b", springnet.Vec{X: 1})
+	c := m.AddNode("c", springnet.Vec{X: 1, Y: 2})
+	d := m.AddNode("d", springnet.Vec{X: 0, Y: 2})
+	m.AddBar(a, b, springnet.Bar{Material: steel, Section: sec})
+	m.AddBeam(b, c, springnet.Beam{Material: steel, Section: sec})
+	m.AddBeam(c, d, springnet.Beam{Material: steel, Section: sec})
+	m.AddBar(d, a, springnet.Bar{Material: steel, Section: sec})
+	g := m.AddRigidGroup("cd", c, d)
+	m.AddMass(g, springnet.Mass{Kg: 50, Offset: springnet.Vec{Z: 0.3}, Inertia: springnet.Vec{X: 1, Y: 1, Z: 1}})
+	m.AddMass(a, springnet.Mass{Kg: 7})
+	m.Fix(a, springnet.AllDOF)
+	m.AddLoadCase("none")
+	sys, err := springnet.Assemble(&m, materials.Nominal)
+	require.NoError(t, err)
+	want := 7850*0.04*0.04*(1+2+1+2) + 50 + 0 // node a is fixed: its 7 kg and half the bars' mass there do not count
+	want -= 7850 * 0.04 * 0.04 * (0.5 + 1)   // half of a–b (1 m) and half of d–a (2 m) sit at a
+	n := sys.N()
+	u := make([]float64, n)
+	for i := 0; i < n; i++ {
+		if _, dof := sys.Equation(i); dof == springnet.UX {
+			u[i] = 1
+		}
+	}
+	f := make([]float64, n)
+	sys.M().MulVec(f, u)
+	got := 0.0
+	for i := 0; i < n; i++ {
+		if _, dof := sys.Equation(i); dof == springnet.UX {
+			got += f[i]
+		}
+	}
+	assert.InEpsilon(t, want, got, 1e-12)
+	var sb strings.Builder
+	require.NoError(t, sys.WriteK(&sb))
+	assert.True(t, strings.HasPrefix(sb.String(), "%%MatrixMarket matrix coordinate real symmetric\n"))
+}

@@ -1,0 +1,118 @@
+package springnet
+
+import (
+	"bufio"
+	"fmt"
+	"io"
+
+	"github.com/trestle-go/trestle/materials"
+	"github.com/trestle-go/trestle/springnet/sparse"
+)
+
+// System is a model's assembled linear system at one material level, over
+// its free equations: stiffness K [N/m, N, N·m/rad], lumped mass M [kg,
+// kg·m, kg·m²] and one load vector per case [N, N·m]. Equation describes
+// each equation as a node or group and a direction. Compression-only feet
+// count as in contact.
+type System struct {
+	nt    *net
+	k, m  *sparse.Matrix
+	loads [][]float64
+}
+
+// Assemble validates m and assembles its system at level l.
+func Assemble(m *Model, l materials.Level) (*System, error) {
+	if err := m.Validate(); err != nil {
+		return nil, err
+	}
+	nt, err := prepare(m, l)
+	if err != nil {
+		return nil, err
+	}
+	s := &System{nt: nt}
+	s.k = nt.assemble(sparse.NewBuilder(0))
+	s.m = nt.assembleMass(sparse.NewBuilder(0))
+	for c := range m.cases {
+		cl, err := nt.buildLoads(CaseID(c))
+		if err != nil {
+			return nil, err
+		}
+		f := nt.dm.eqVector(nil, cl.grav)
+		fv := nt.dm.eqVector(nil, cl.vari)
+		for i := range f {
+			f[i] += fv[i]
+		}
+		s.loads = append(s.loads, f)
+	}
+	return s, nil
+}
+
+// N returns the number of equations.
+func (s *System) N() int { return s.nt.dm.n }
+
+// K returns the stiffness matrix (shared; do not modify).
+func (s *System) K() *sparse.Matrix { return s.k }
+
+// M returns the lumped mass matrix (shared; do not modify).
+func (s *System) M() *sparse.Matrix { return s.m }
+
+// LoadTo writes the load vector of case c into dst (nil allocates) and
+// returns it.
+func (s *System) LoadTo(dst []float64, c CaseID) []float64 {
+	s.nt.m.CaseName(c)
+	if dst == nil {
+		dst = make([]float64, s.N())
+	}
+	copy(dst, s.loads[c])
+	return dst
+}
+
+// Equation describes equation i: the node or group that owns it, for
+// example `node "B3"` or `group "top"`, and its direction.
+func (s *System) Equation(i int) (owner string, d DOF) {
+	if i < 0 || i >= s.N() {
+		panic(fmt.Sprintf("springnet: equation %d out of range [0, %d)", i, s.N()))
+	}
+	dm := &s.nt.dm
+	return dm.ownerName(s.nt.m, dm.eqOwner[i]), dofAt(int(dm.eqComp[i]))
+}
+
+// Point returns the point in space of equation i's node or group [m].
+func (s *System) Point(i int) Vec { return vecOf(s.nt.dm.coords[i]) }
+
+// WriteK writes K in Matrix Market coordinate format (symmetric, lower
+// triangle, 1-based).
+func (s *System) WriteK(w io.Writer) error {
+	return writeMatrixMarket(w, s.k, "stiffness K [N/m, N, N*m/rad], trestle springnet")
+}
+
+// WriteM writes the lumped mass matrix in Matrix Market coordinate format.
+func (s *System) WriteM(w io.Writer) error {
+	return writeMatrixMarket(w, s.m, "lumped mass M [kg, kg*m, kg*m^2], trestle springnet")
+}
+
+// WriteLoad writes the load vector of case c in Matrix Market array format.
+func (s *System) WriteLoad(w io.Writer, c CaseID) error {
+	name := s.nt.m.CaseName(c)
+	bw := bufio.NewWriter(w)
+	fmt.Fprintf(bw, "%%%%MatrixMarket matrix array real general\n%% load vector of case %q [N, N*m], trestle springnet\n%d 1\n", name, s.N())
+	for _, v := range s.loads[c] {
+		fmt.Fprintf(bw, "%.17g\n", v)
+	}
+	return bw.Flush()
+}
+
+// writeMatrixMarket writes a symmetric sparse matrix (the sparse package
+// has no writer yet; this small one follows the NIST Matrix Market
+// exchange format, coordinate real symmetric).
+func writeMatrixMarket(w io.Writer, a *sparse.Matrix, comment string) error {
+	bw := bufio.NewWriter(w)
+	fmt.Fprintf(bw, "%%%%MatrixMarket matrix coordinate real symmetric\n%% %s\n%d %d %d\n", comment, a.N(), a.N(), a.NNZ())
+	for j := 0; j < a.N(); j++ {
+		rows, vals := a.Col(j)
+		for p, r := range rows {
+			fmt.Fprintf(bw, "%d %d %.17g\n", r+1, j+1, vals[p])
+		}
+	}
+	return bw.Flush()
+}
