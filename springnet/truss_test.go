@@ -238,7 +238,7 @@ func TestLumpedMassTotal(t *testing.T) {
 	sys, err := springnet.Assemble(&m, materials.Nominal)
 	require.NoError(t, err)
 	want := 7850*0.04*0.04*(1+2+1+2) + 50 + 0 // node a is fixed: its 7 kg and half the bars' mass there do not count
-	want -= 7850 * 0.04 * 0.04 * (0.5 + 1)   // half of a–b (1 m) and half of d–a (2 m) sit at a
+	want -= 7850 * 0.04 * 0.04 * (0.5 + 1)    // half of a–b (1 m) and half of d–a (2 m) sit at a
 	n := sys.N()
 	u := make([]float64, n)
 	for i := 0; i < n; i++ {
