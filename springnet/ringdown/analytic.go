@@ -12,33 +12,41 @@ type Band struct{ Low, High float64 }
 // IsZero reports whether b is the zero Band (no band).
 func (b Band) IsZero() bool { return b == Band{} }
 
-// taperFraction is the width of the cosine skirt on each side of a
-// band-pass, as a fraction of the band's width. A wider skirt shortens the
-// filter's own ring in time; a narrower one rejects a close neighbour better.
-const taperFraction = 0.25
+// skirtFraction is the standard deviation of the Gaussian skirt on each
+// side of a band-pass, as a fraction of the band's width. A Gaussian skirt
+// gives the filter an impulse response with Gaussian tails, so a strike
+// leaks into the isolated signal only for a short, known time; a wider skirt
+// shortens that time, a narrower one rejects a close neighbour better
+// (about −40 dB at 1.5 band-widths × skirtFraction × 2 beyond the edge).
+const skirtFraction = 0.2
 
-// gain returns the band-pass gain at f: 1 inside the band, a raised-cosine
-// skirt of width taperFraction·(High−Low) outside it, 0 beyond.
+// gain returns the band-pass gain at f: 1 inside the band, a Gaussian skirt
+// exp(−d²/(2s²)) at distance d outside it, s = skirtFraction·(High−Low).
 func (b Band) gain(f float64) float64 {
-	w := taperFraction * (b.High - b.Low)
+	s := skirtFraction * (b.High - b.Low)
+	var d float64
 	switch {
-	case f >= b.Low && f <= b.High:
+	case f < b.Low:
+		d = b.Low - f
+	case f > b.High:
+		d = f - b.High
+	default:
 		return 1
-	case f < b.Low && f > b.Low-w:
-		return 0.5 * (1 + math.Cos(math.Pi*(b.Low-f)/w))
-	case f > b.High && f < b.High+w:
-		return 0.5 * (1 + math.Cos(math.Pi*(f-b.High)/w))
 	}
-	return 0
+	if d > 9*s {
+		return 0
+	}
+	return math.Exp(-d * d / (2 * s * s))
 }
 
-// settle returns the time the band-pass filter needs to settle after a step
-// [s]: about four lengths of its skirt's impulse response.
+// settle returns how long the band-pass needs to forget a strike [s]: four
+// standard deviations of the Gaussian envelope of its impulse response,
+// 4/(2π s).
 func (b Band) settle() float64 {
 	if b.IsZero() {
 		return 0
 	}
-	return 4 / (taperFraction * (b.High - b.Low))
+	return 4 / (2 * math.Pi * skirtFraction * (b.High - b.Low))
 }
 
 // analytic returns the (band-passed when band is not zero) signal y and its

@@ -153,6 +153,7 @@ type reduction struct {
 	x       []float64  // detrended record
 	y, h    []float64  // isolated signal and its Hilbert transform
 	env     []float64  // analytic-signal envelope |y + i h|
+	es      []float64  // env smoothed over one period
 	f0      float64    // spectral peak frequency [Hz]
 	over    spectrum   // overview spectrum (from the strike on)
 	strike  int        // index of the largest |x|
@@ -342,15 +343,14 @@ func (r *reduction) chooseWindow() error {
 	pi := max(1, int(math.Round(p)))
 	// Smoothed envelope: moving average over one period.
 	es := movingAverage(r.env, pi)
-	// Noise floor from the record's last tenth; the floor is reached when
-	// the envelope no longer falls across that tail.
+	r.es = es
+	// Noise floor: the median envelope over the record's last tenth. Whether
+	// that tail is noise or still the decay is settled below, once the
+	// window start is known.
 	tail := max(int(floorTail*float64(n)), 4*pi)
 	tail = min(tail, n/2)
 	t0 := n - tail
 	r.floor = median(es[t0:])
-	a := median(es[t0 : t0+tail/2])
-	b := median(es[t0+tail/2:])
-	r.floorOK = b > 0 && a/b < 1.5
 	edge := int(math.Ceil(2 * p))
 	settle := int(math.Ceil(r.cfg.band.settle() * r.fs))
 	if !r.cfg.Window.IsZero() {
@@ -376,14 +376,25 @@ func (r *reduction) chooseWindow() error {
 		r.addWarn("%d clipped samples (sensor or logger at its range limit): the fit starts after the last one, at %.4g s", r.clipped, r.rec.Time(r.clipEnd))
 	}
 	end := n - 1 - max(edge, settle)
-	if r.floorOK {
-		thr := r.cfg.NoiseFactor * r.floor
-		for i := start; i <= end; i++ {
-			if es[i] < thr {
-				end = i
-				break
-			}
+	// The envelope first falls below NoiseFactor × floor at cross. The tail
+	// is the noise floor if the decay from start to cross, carried on to
+	// the middle of the tail, ends well below the floor; otherwise the tail
+	// is still the ring-down and the window runs to the end of the record.
+	thr := r.cfg.NoiseFactor * r.floor
+	cross := -1
+	for i := start; i <= min(end, t0); i++ {
+		if es[i] < thr {
+			cross = i
+			break
 		}
+	}
+	if cross > start && es[start] > es[cross] && es[cross] > 0 {
+		rate := math.Log(es[start]/es[cross]) / float64(cross-start) // per sample
+		predicted := es[cross] * math.Exp(-rate*float64(t0+tail/2-cross))
+		r.floorOK = predicted < 0.5*r.floor
+	}
+	if r.floorOK {
+		end = cross
 	}
 	if end-start < int(2*p) {
 		return fmt.Errorf("ringdown: the %.4g Hz ring-down stays clear of the noise floor (and of clipping) for fewer than two cycles", r.f0)
@@ -479,15 +490,18 @@ func (r *reduction) cycles(om float64) float64 {
 }
 
 // peaksMethod reads the extrema of the signal where the analytic phase
-// crosses multiples of π, refines each with the three-point sinusoid
-// interpolation, and fits the logarithm of their amplitudes (weights A²)
+// crosses multiples of π, refines each by fitting a sinusoid of the mode's
+// frequency to the samples within ±1/8 cycle (three samples at least), and
+// fits the logarithm of their amplitudes (weights A²)
 // and their times against their index.
 func (r *reduction) peaksMethod() MethodEstimate {
 	me := MethodEstimate{Method: MethodPeaks}
 	a, b := r.win[0], r.win[1]
 	ph := r.unwrappedPhase()
 	w := 2 * math.Pi * r.f0 / r.fs // radians per sample
-	sw := math.Sin(w)
+	p := r.period()
+	reach := max(1, int(p/8)) // search for the extremum within ±1/8 cycle of the crossing
+	half := max(1, int(p/8))  // half-width of the local sinusoid fit
 	var tk, lk, wk, idx []float64
 	m0 := math.Ceil(ph[0] / math.Pi)
 	j := 0
@@ -499,28 +513,17 @@ func (r *reduction) peaksMethod() MethodEstimate {
 		if j >= len(ph) {
 			break
 		}
-		// The extremum is the largest |y| near the crossing.
 		k := a + j
-		for _, c := range []int{a + j - 1, a + j + 1} {
-			if c > 0 && c < len(r.y)-1 && math.Abs(r.y[c]) > math.Abs(r.y[k]) {
+		for c := a + j - reach; c <= a+j+reach; c++ {
+			if c >= 0 && c < len(r.y) && math.Abs(r.y[c]) > math.Abs(r.y[k]) {
 				k = c
 			}
 		}
-		if k <= 0 || k >= len(r.y)-1 || k < a || k > b {
+		if k-half < a || k+half > b {
 			continue
 		}
-		y0, ym, yp := r.y[k], r.y[k-1], r.y[k+1]
-		if y0 < 0 {
-			y0, ym, yp = -y0, -ym, -yp
-		}
-		if math.Abs(y0) < math.Abs(ym) || math.Abs(y0) < math.Abs(yp) || sw < 1e-6 {
-			continue
-		}
-		// y(n) = A cos(θ + n·w): A cos θ = y0, A sin θ = (y₋₁ − y₊₁)/(2 sin w).
-		s := (ym - yp) / (2 * sw)
-		amp := math.Hypot(y0, s)
-		off := -math.Atan2(s, y0) / w
-		if amp <= 0 || math.Abs(off) > 1 {
+		amp, off, ok := localSine(r.y[k-half:k+half+1], w)
+		if !ok || math.Abs(off) > float64(reach)+1 {
 			continue
 		}
 		tk = append(tk, (float64(k-a)+off)/r.fs)
@@ -575,12 +578,24 @@ func (r *reduction) sineMethod(hb MethodEstimate, hf hilbertFit) (MethodEstimate
 }
 
 // halfPowerMethod measures the half-power bandwidth of the rectangular-
-// windowed spectrum of the fit window, zero-padded so the bandwidth spans
-// at least about 20 bins. For the free decay e^(−σt) sin(ω_d t) the
-// spectrum near ω_d is |1/(σ + i(ω−ω_d))|², whose half-power points are
-// ω_d ± σ (Inman, Engineering Vibration, §2.2 for the half-power method);
-// so σ = Δω/2 and ζ = σ/√(ω_d² + σ²). Its uncertainty is the change when
-// the window is shortened by a quarter.
+// windowed spectrum of the ring-down from the window start to where the
+// envelope meets the noise floor, zero-padded so that the bandwidth spans
+// about 20 bins. For the free decay e^(−σt) sin(ω_d t) the spectrum near
+// ω_d is |1/(σ + i(ω−ω_d))|², whose half-power points are ω_d ± σ (the
+// half-power method: Inman, Engineering Vibration, §2.2); so σ = Δω/2 and
+// ζ = σ/√(ω_d² + σ²).
+//
+// A segment cut short, where the decay has fallen only to r of its start,
+// has the spectrum |1 − r e^(−i(ω−ω_d)T)|² / (σ² + (ω−ω_d)²) (the Fourier
+// transform of the truncated decay), whose half-power points lie wider, at
+// ω_d ± x(r)·σ; the measured half-width is divided by x(r) (truncationWidth),
+// with r taken from the envelope fit's decay rate over the segment.
+//
+// Its uncertainty combines the change when the segment is shortened by a
+// quarter (truncation) and the noise: with ε the typical noise amplitude in
+// the spectrum relative to the peak (spectrum.noiseRatio), noise moves each
+// half-power point by about 2√2·ε half-widths (where the Lorentzian's power
+// falls at half a peak per half-width), so u(σ)/σ ≈ 2ε.
 func (r *reduction) halfPowerMethod(hf hilbertFit) MethodEstimate {
 	me := MethodEstimate{Method: MethodHalfPower}
 	a, b := r.win[0], r.win[1]
@@ -588,36 +603,127 @@ func (r *reduction) halfPowerMethod(hf hilbertFit) MethodEstimate {
 	if !(sigEst > 0) {
 		sigEst = 2 * math.Pi * r.f0 * 0.01
 	}
-	measure := func(seg []float64) (sig, om, lo, hi float64, ok bool) {
-		df := sigEst / math.Pi / 20
-		nfft := max(4*len(seg), int(math.Min(r.fs/df, 1<<22)))
-		sp := amplitudeSpectrum(seg, nfft, r.fs)
-		c := r.f0 / sp.df
-		k, frac := sp.peak(int(0.8*c), int(1.2*c)+1)
+	// Zoom: keep ±bw around the mode, sampled at 16·bw or more.
+	bw := math.Max(10*sigEst/math.Pi, 0.2*r.f0)
+	dec := max(1, int(r.fs/(16*bw)))
+	measure := func(a, end int) (sig, om, lo, hi, eps float64, ok bool) {
+		x := truncationWidth(math.Exp(-sigEst * float64(end-a) / r.fs))
+		sp := zoomSpectrum(r.y[a:end+1], r.h[a:end+1], r.fs, r.f0, dec, sigEst/math.Pi/20)
+		k, frac := sp.peak(int(sp.bin(0.8*r.f0)), int(sp.bin(1.2*r.f0))+1)
 		if k < 0 {
-			return 0, 0, 0, 0, false
+			return 0, 0, 0, 0, 0, false
 		}
 		lo, hi, ok = sp.halfPower(k)
 		if !ok {
-			return 0, 0, 0, 0, false
+			return 0, 0, 0, 0, 0, false
 		}
-		return math.Pi * (hi - lo), 2 * math.Pi * sp.freq(frac), lo, hi, true
+		eps = sp.noiseRatio(k, frac, (hi-lo)/2, r.f0-bw, r.f0+bw)
+		return math.Pi * (hi - lo) / x, 2 * math.Pi * sp.freq(frac), lo, hi, eps, true
 	}
-	seg := r.y[a : b+1]
-	sig, om, lo, hi, ok := measure(seg)
+	// The segment runs on past the window to where the envelope meets the
+	// noise floor, so that the decay is nearly complete (cutting it short
+	// widens the peak) without adding more noise than needed.
+	last := len(r.y) - 1 - int(math.Ceil(2*r.period()+r.cfg.band.settle()*r.fs))
+	end := max(last, b)
+	if r.floorOK {
+		for i := b; i <= last; i++ {
+			if r.es[i] < r.floor {
+				end = i
+				break
+			}
+		}
+	}
+	sig, om, lo, hi, eps, ok := measure(a, end)
 	if !ok {
 		me.Note = "no half-power points around the peak"
 		return me
 	}
 	r.halfPts = [2]float64{lo, hi}
-	sig2, om2, _, _, ok2 := measure(seg[:len(seg)*3/4])
+	sig2, om2, _, _, _, ok2 := measure(a, a+(end-a)*3/4)
 	if !ok2 {
 		sig2, om2 = sig, om
 	}
-	me.set(sig, math.Abs(sig2-sig), om, math.Abs(om2-om), r.cycles(om))
-	if rEnd := math.Exp(-sig * float64(b-a) / r.fs); rEnd > 0.2 {
+	usig := math.Hypot(sig2-sig, 2*eps*sig)
+	uom := math.Hypot(om2-om, 2*eps*sig)
+	me.set(sig, usig, om, uom, r.cycles(om))
+	me.Note = fmt.Sprintf("%d samples, spectrum noise %.2g of peak amplitude", end-a+1, eps)
+	if rEnd := math.Exp(-sigEst * float64(end-a) / r.fs); rEnd > 0.2 {
 		me.OK = false
-		me.Note = fmt.Sprintf("the window ends at %.0f %% of its starting amplitude: too short for the half-power bandwidth", 100*rEnd)
+		me.Note = fmt.Sprintf("the ring-down falls only to %.0f %% of its starting amplitude: too short for the half-power bandwidth", 100*rEnd)
 	}
 	return me
+}
+
+// truncationWidth returns x, the half-power half-width in units of σ of
+// the spectrum of a decay e^(−σt) e^(iω_d t) cut off at time T where it has
+// fallen to r = e^(−σT) of its start:
+//
+//	|1 − r e^(−i x L)|² / (1 + x²) = (1 − r)²/2,  L = σT = −ln r,
+//
+// the first root above zero. x = 1 for r = 0 (the Lorentzian); x ≈ 1.41
+// for r = 0.1. r outside (0, 0.5) gives 1.
+func truncationWidth(r float64) float64 {
+	if !(r > 1e-12) || r >= 0.5 {
+		return 1
+	}
+	l := -math.Log(r)
+	g := func(x float64) float64 {
+		s, c := math.Sincos(x * l)
+		re, im := 1-r*c, r*s
+		return (re*re+im*im)/(1+x*x) - (1-r)*(1-r)/2
+	}
+	lo, hi := 0.0, 0.0
+	for x := 0.01; x < 5; x += 0.01 {
+		if g(x) <= 0 {
+			lo, hi = x-0.01, x
+			break
+		}
+	}
+	if hi == 0 {
+		return 1
+	}
+	for range 50 {
+		m := (lo + hi) / 2
+		if g(m) > 0 {
+			lo = m
+		} else {
+			hi = m
+		}
+	}
+	return (lo + hi) / 2
+}
+
+// localSine fits y[n] = α cos(w(n−c)) + β sin(w(n−c)) by least squares to
+// the samples y (c their centre) and returns the amplitude √(α²+β²) and the
+// offset of the extremum from the centre in samples. For a lightly damped
+// mode the decay over a quarter cycle is negligible; three samples make
+// the fit exact for a pure sinusoid at any sampling above Nyquist.
+func localSine(y []float64, w float64) (amp, off float64, ok bool) {
+	c := (len(y) - 1) / 2
+	var scc, sss, scs, syc, sys float64
+	for i, v := range y {
+		s, co := math.Sincos(w * float64(i-c))
+		scc += co * co
+		sss += s * s
+		scs += co * s
+		syc += v * co
+		sys += v * s
+	}
+	det := scc*sss - scs*scs
+	if !(math.Abs(det) > 1e-12) {
+		return 0, 0, false
+	}
+	alpha := (syc*sss - sys*scs) / det
+	beta := (sys*scc - syc*scs) / det
+	amp = math.Hypot(alpha, beta)
+	if !(amp > 0) {
+		return 0, 0, false
+	}
+	// α cos x + β sin x = A cos(x − θ), θ = atan2(β, α); for a trough take
+	// the maximum of −y, θ + π.
+	th := math.Atan2(beta, alpha)
+	if y[c] < 0 {
+		th = math.Atan2(-beta, -alpha)
+	}
+	return amp, th / w, true
 }
