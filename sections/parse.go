@@ -359,6 +359,9 @@ func options(kind string, toks []string, u lengthUnit, keys, words []string) (ma
 			continue
 		}
 		if !contains(keys, k) {
+			if len(keys)+len(words) == 0 {
+				return nil, nil, fmt.Errorf("unexpected %q after the %s's sizes", t, kind)
+			}
 			return nil, nil, fmt.Errorf("unknown option %q for %s (known: %s)", k+"=", kind, known())
 		}
 		if _, dup := vals[k]; dup {
@@ -491,11 +494,10 @@ func parsePipe(p *specParser) (Section, error) {
 	sch := rest[0]
 	switch {
 	case sch == "std" || sch == "xs":
-	case strings.HasPrefix(sch, "sch"):
+	case sch == "sch" && len(rest) > 1: // "sch 40"
+		sch, rest = rest[1], rest[1:]
+	case schRE.MatchString(sch):
 		sch = strings.TrimPrefix(sch, "sch")
-		if sch == "" && len(rest) > 1 { // "sch 40"
-			sch, rest = rest[1], rest[1:]
-		}
 	default:
 		return nil, fmt.Errorf("pipe schedule %q should read sch10, sch40, sch80, sch160, std or xs", sch)
 	}
@@ -696,6 +698,8 @@ func parseFilled(p *specParser, info *kindInfo) (Section, error) {
 	}
 	return f, nil
 }
+
+var schRE = regexp.MustCompile(`^sch[0-9]+$`)
 
 var qtyRE = regexp.MustCompile(`^(.*?)(mm|cm|m|in)(\^?([0-9])|²|⁴)?$`)
 

@@ -57,41 +57,40 @@ func (u lengthUnit) fromSI(v float64, p int) float64 {
 	return v
 }
 
+// specRoundTrip is how close a length written in a spec must convert
+// back to the value it came from, relative: a few ulps, so that 6 in
+// prints as "6" even when 6 × 0.0254 was rounded differently in a
+// constant expression than at run time.
+const specRoundTrip = 1e-15
+
 // formatIn returns the shortest decimal text x such that parsing it in
-// unit u (power p) gives back exactly v, and whether there is one.
+// unit u (power p) gives back v to within specRoundTrip, and whether
+// there is one.
 func (u lengthUnit) formatIn(v float64, p int) (string, bool) {
 	x := u.fromSI(v, p)
-	if math.IsNaN(x) || math.IsInf(x, 0) {
+	if math.IsNaN(x) || math.IsInf(x, 0) || x <= 0 {
 		return "", false
 	}
-	best := ""
-	for _, c := range neighbours(x, 4) {
-		s := strconv.FormatFloat(c, 'g', -1, 64)
-		if back, err := strconv.ParseFloat(s, 64); err == nil && u.toSI(back, p) == v {
-			if best == "" || len(s) < len(best) {
-				best = s
-			}
+	for prec := 1; prec <= 17; prec++ {
+		s := strconv.FormatFloat(x, 'g', prec, 64)
+		back, err := strconv.ParseFloat(s, 64)
+		if err != nil {
+			return "", false
+		}
+		if strings.ContainsAny(s, "e") && back >= 1e-3 && back < 1e7 {
+			s = strconv.FormatFloat(back, 'f', -1, 64)
+		}
+		if math.Abs(u.toSI(back, p)-v) <= specRoundTrip*v {
+			return s, true
 		}
 	}
-	return best, best != ""
-}
-
-// neighbours returns x and up to n floats either side of it.
-func neighbours(x float64, n int) []float64 {
-	out := []float64{x}
-	lo, hi := x, x
-	for range n {
-		lo = math.Nextafter(lo, math.Inf(-1))
-		hi = math.Nextafter(hi, math.Inf(1))
-		out = append(out, lo, hi)
-	}
-	return out
+	return "", false
 }
 
 // formatDims writes the lengths vs (SI) in one unit and returns the
-// texts and the unit. It takes mm or in, whichever writes all values
-// exactly in fewer characters (mm on a tie), else the first of cm, m, ft
-// that is exact; metres always round-trip exactly.
+// texts and the unit. It takes mm or in, whichever writes all values (to
+// within specRoundTrip) in fewer characters, mm on a tie, else the first
+// of cm, m, ft that can.
 func formatDims(vs []float64) (dims []string, unit lengthUnit) {
 	try := func(u lengthUnit) ([]string, int, bool) {
 		out := make([]string, len(vs))
@@ -144,10 +143,8 @@ func formatLenIn(v float64, u lengthUnit) string {
 // attached (mm2, cm4, m ...), choosing the shortest exact form.
 func formatQty(v float64, p int) string {
 	best := ""
-	for _, u := range lengthUnits {
-		if u.name == "ft" {
-			continue
-		}
+	for _, name := range []string{"cm", "mm", "in", "m"} {
+		u, _ := findUnit(name)
 		s, ok := u.formatIn(v, p)
 		if !ok {
 			continue
