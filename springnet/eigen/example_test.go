@@ -71,8 +71,8 @@ func ExampleResult_RigidBody() {
 // π²EI/L².
 func ExampleBuckling() {
 	const n, L, EI = 39, 2.0, 1e4 // interior joints, m, N·m²
-	a := L / (n + 1) // link length [m]
-	c := EI / a      // rotational spring [N·m/rad]
+	a := L / (n + 1)              // link length [m]
+	c := EI / a                   // rotational spring [N·m/rad]
 	// DOF: lateral deflection of each joint. K = (c/a²)·T², Kg = −T/a for
 	// a 1 N compression, T = tridiag(−1, 2, −1).
 	bk, bg := sparse.NewBuilder(n), sparse.NewBuilder(n)
