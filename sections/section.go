@@ -1,10 +1,6 @@
 package sections
 
-import (
-	"math"
-
-	"github.com/trestle-go/trestle/materials"
-)
+import "github.com/trestle-go/trestle/materials"
 
 // Section is a member cross-section. Local axes: x along the member, y and
 // z in the section plane; Iy is the second moment about the y axis (bending
@@ -85,6 +81,3 @@ func MassPerLength(parts []Part) float64 {
 	}
 	return m
 }
-
-// finitePos reports whether x is finite and > 0.
-func finitePos(x float64) bool { return x > 0 && !math.IsInf(x, 1) }
