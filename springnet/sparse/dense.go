@@ -1,6 +1,5 @@
 package sparse
 
-
 // Dense kernels on row-major blocks: element (i, j) of a block with
 // leading dimension ld is x[i*ld+j].
 
@@ -39,15 +38,15 @@ func (w *gemmWork) gemmNT(r, c, k int, a []float64, lda int, b []float64, ldb in
 // panelWidth is the number of pivots factorised together in partialLDLT.
 const panelWidth = 64
 
-// partialLDLT eliminates the first k of the m rows/columns of the
-// symmetric front f (lower triangle, row-major, leading dimension m):
-// afterwards f[:, :k] holds the unit lower factor columns, d[:k] the
-// pivots, and the trailing (m−k)×(m−k) lower triangle the Schur
-// complement. w must hold at least max(panelWidth², k·panelWidth, (m−k)·k) values.
+// partialLDLT eliminates the first k of the m rows/columns of a
+// symmetric front held as its first k columns f (m×k, row-major, lower
+// part of the top k×k block) and the lower triangle of its trailing
+// (m−k)×(m−k) block ub (row-major). Afterwards f holds the unit lower
+// factor columns, d[:k] the pivots, and ub the Schur complement. w must hold at least max(panelWidth², k·panelWidth, (m−k)·k) values.
 // Each pivot j is checked by pc.checkPivot(c0+j, ·); an error stops the
 // factorisation.
-func partialLDLT(f []float64, m, k int, d, w []float64, gw *gemmWork, pc *Factor, c0 int) error {
-	ld := m
+func partialLDLT(f, ub []float64, m, k int, d, w []float64, gw *gemmWork, pc *Factor, c0 int) error {
+	ld := k
 	for p0 := 0; p0 < k; p0 += panelWidth {
 		p1 := min(p0+panelWidth, k)
 		pb := p1 - p0
@@ -121,6 +120,6 @@ func partialLDLT(f []float64, m, k int, d, w []float64, gw *gemmWork, pc *Factor
 			dst[c] = v * d[c]
 		}
 	}
-	gw.gemmNT(u, u, k, f[k*ld:], ld, w2, k, f[k*ld+k:], ld, true)
+	gw.gemmNT(u, u, k, f[k*ld:], ld, w2, k, ub, u, true)
 	return nil
 }

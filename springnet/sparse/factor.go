@@ -261,14 +261,14 @@ func (f *Factor) analyzePerm(a *Matrix, perm0 []int) error {
 		rows := f.srow[f.sptr[s]:f.sptr[s+1]]
 		m := len(rows)
 		f.lptr[s+1] = f.lptr[s] + m*k
-		f.frontMx = max(f.frontMx, m*m)
+		f.frontMx = max(f.frontMx, (m-k)*(m-k))
 		maxWork = max(maxWork, k*panelWidth, (m-k)*k)
 		for t, i := range rows {
 			pos[i] = t
 		}
 		for j := f.sfirst[s]; j < f.sfirst[s+1]; j++ {
 			for p := pat.cp[j]; p < pat.cp[j+1]; p++ {
-				f.fo[p] = pos[pat.ci[p]]*m + pos[j]
+				f.fo[p] = pos[pat.ci[p]]*k + pos[j]
 			}
 		}
 		for _, c := range f.child[f.cptr[s]:f.cptr[s+1]] {
@@ -345,13 +345,18 @@ func (f *Factor) Factorize(a *Matrix) error {
 		c0, c1 := f.sfirst[s], f.sfirst[s+1]
 		k := c1 - c0
 		m := f.sptr[s+1] - f.sptr[s]
-		fr := f.front[:m*m]
-		for i := 0; i < m; i++ {
-			clear(fr[i*m : i*m+i+1])
+		// L's block (m×k, row-major) is the front's first k columns; the
+		// rest of the front's lower triangle, the update matrix, is ub.
+		lx := f.lx[f.lptr[s]:f.lptr[s+1]]
+		clear(lx)
+		u := m - k
+		ub := f.front[:u*u]
+		for i := 0; i < u; i++ {
+			clear(ub[i*u : i*u+i+1])
 		}
 		// Assemble A's columns.
 		for p := f.cp[c0]; p < f.cp[c1]; p++ {
-			fr[f.fo[p]] += f.cx[p]
+			lx[f.fo[p]] += f.cx[p]
 		}
 		// Extend-add the children's update matrices (on top of the stack,
 		// last child on top).
@@ -359,34 +364,35 @@ func (f *Factor) Factorize(a *Matrix) error {
 		for t := len(ch) - 1; t >= 0; t-- {
 			c := ch[t]
 			rel := f.rel[f.relptr[c]:f.relptr[c+1]]
-			u := len(rel)
-			top -= u * u
-			upd := f.stack[top : top+u*u]
+			uc := len(rel)
+			top -= uc * uc
+			upd := f.stack[top : top+uc*uc]
+			nl := 0 // rel[:nl] are pivot columns of s
+			for nl < uc && rel[nl] < k {
+				nl++
+			}
 			for i, ri := range rel {
-				dst := fr[ri*m:]
-				src := upd[i*u : i*u+i+1]
-				for j, v := range src {
-					dst[rel[j]] += v
+				src := upd[i*uc : i*uc+i+1]
+				dl := lx[ri*k:]
+				for j, v := range src[:min(i+1, nl)] {
+					dl[rel[j]] += v
+				}
+				if i >= nl {
+					du := ub[(ri-k)*u : (ri-k+1)*u]
+					for j := nl; j <= i; j++ {
+						du[rel[j]-k] += src[j]
+					}
 				}
 			}
 		}
 		// Partial factorisation with the pivot test on original diagonals.
-		if err := partialLDLT(fr, m, k, f.d[c0:c1], f.work, f.gw, f, c0); err != nil {
+		if err := partialLDLT(lx, ub, m, k, f.d[c0:c1], f.work, f.gw, f, c0); err != nil {
 			return err
 		}
-		// Keep L's columns; push the update matrix.
-		lx := f.lx[f.lptr[s]:f.lptr[s+1]]
-		for i := 0; i < k; i++ {
-			copy(lx[i*k:i*k+i], fr[i*m:i*m+i])
-			clear(lx[i*k+i : (i+1)*k])
-		}
-		for i := k; i < m; i++ {
-			copy(lx[i*k:(i+1)*k], fr[i*m:i*m+k])
-		}
-		if u := m - k; u > 0 {
+		if u > 0 {
 			upd := f.stack[top : top+u*u]
 			for i := 0; i < u; i++ {
-				copy(upd[i*u:i*u+i+1], fr[(k+i)*m+k:(k+i)*m+k+i+1])
+				copy(upd[i*u:i*u+i+1], ub[i*u:i*u+i+1])
 			}
 			top += u * u
 		}
