@@ -435,3 +435,43 @@ func TestMasslessMechanism(t *testing.T) {
 	require.ErrorAs(t, err, &se)
 	assert.Equal(t, 3, se.Col)
 }
+
+// TestLowestUserShift: with a shift inside the spectrum Lowest returns the
+// eigenvalues nearest it, and the Sturm check bounds them on both sides.
+func TestLowestUserShift(t *testing.T) {
+	rng := rand.New(rand.NewPCG(1, 1))
+	for trial := 0; trial < 4; trial++ {
+		c := randomNetwork(rng, 60+20*trial, true, trial%2 == 1, 0)
+		ref := denseAll(t, c.k, c.m)
+		sigma := ref[10+trial] + 0.37*(ref[11+trial]-ref[10+trial])
+		const nev = 5
+		t.Run(c.name, func(t *testing.T) {
+			res, err := eigen.Lowest(c.k, c.m, nev, &eigen.Settings{Shift: sigma, ShiftSet: true})
+			require.NoError(t, err)
+			// The nev dense eigenvalues nearest σ, ascending.
+			near := append([]float64(nil), ref...)
+			for i := range near {
+				for j := i + 1; j < len(near); j++ {
+					if math.Abs(near[j]-sigma) < math.Abs(near[i]-sigma) {
+						near[i], near[j] = near[j], near[i]
+					}
+				}
+			}
+			near = near[:nev]
+			sortFloats(near)
+			for i := range near {
+				assert.InEpsilon(t, near[i], res.Values[i], freqTol, "mode %d", i)
+			}
+			require.True(t, res.Checked)
+			inside := 0
+			for _, v := range ref {
+				if v >= res.SturmLow && v < res.SturmShift {
+					inside++
+				}
+			}
+			assert.Equal(t, inside, res.SturmCount)
+			assert.Less(t, res.SturmLow, res.Values[0])
+			assert.Greater(t, res.SturmShift, res.Values[nev-1])
+		})
+	}
+}

@@ -102,11 +102,14 @@ type Result struct {
 	// Residuals[i] is the relative residual of pair i (see the package doc).
 	Residuals []float64
 	// SturmCount is the number of eigenvalues in the checked interval
-	// found by the Sturm-sequence count; Checked says whether that count
-	// was made and agreed with the eigenvalues found there. SturmShift is
-	// the upper end σ₂ of the interval (the lower end is Shift when no
-	// eigenvalue lies below it).
+	// [SturmLow, SturmShift) by the Sturm-sequence count; Checked says
+	// whether that count was made and agreed with the eigenvalues found
+	// there. SturmShift is σ₂, just above the highest returned eigenvalue;
+	// SturmLow is the shift σ when no eigenvalue lies below it (the usual
+	// case: the returned eigenvalues are then the lowest), otherwise a
+	// second Sturm shift just below the lowest returned eigenvalue.
 	SturmCount int
+	SturmLow   float64
 	SturmShift float64
 	Checked    bool
 	// Shift is the spectral shift σ used for the Lanczos factorisation.

@@ -102,7 +102,7 @@ func (pb *problem) run(kr *krylov, n int, st *Settings) ([]pair, *ritz, sturm, e
 				all = append(all, pair{pb.toLambda(rz.theta[j]), j})
 			}
 		}
-		sel := all[:min(n, len(all))]
+		sel := append([]pair(nil), all[:min(n, len(all))]...)
 		if len(sel) == 0 {
 			return nil, rz, sturm{}, &FewerModesError{Want: n, Found: 0}
 		}
@@ -111,12 +111,18 @@ func (pb *problem) run(kr *krylov, n int, st *Settings) ([]pair, *ritz, sturm, e
 		for _, p := range sel {
 			lo, hi = math.Min(lo, p.lambda), math.Max(hi, p.lambda)
 		}
+		if pb.below > 0 {
+			// Eigenvalues lie on both sides of the shift: to prove the
+			// chosen ones are the nearest, the check covers every
+			// eigenvalue within their largest distance d of the shift.
+			d := math.Max(hi-pb.shift, pb.shift-lo)
+			lo, hi = math.Min(lo, pb.shift-d), math.Max(hi, pb.shift+d)
+		}
 		chk, err := pb.check(all, lo, hi)
 		if err != nil {
 			return nil, nil, sturm{}, err
 		}
 		if chk.count == chk.found || chk.count < chk.found || attempt >= 2 {
-			sel = append([]pair(nil), sel...)
 			sort.Slice(sel, func(a, b int) bool { return sel[a].lambda < sel[b].lambda })
 			if chk.count != chk.found {
 				return nil, nil, chk, &MissedModesError{Low: chk.lo, High: chk.hi, Count: chk.count, Found: chk.found}
@@ -213,7 +219,7 @@ func (pb *problem) check(all []pair, lo, hi float64) (sturm, error) {
 func (pb *problem) finish(kr *krylov, rz *ritz, sel []pair, chk sturm, st *Settings) (*Result, error) {
 	n := kr.n
 	res := &Result{
-		n: n, Shift: pb.shift, SturmCount: chk.count, SturmShift: chk.hi, Checked: chk.checked,
+		n: n, Shift: pb.shift, SturmCount: chk.count, SturmLow: chk.lo, SturmShift: chk.hi, Checked: chk.checked,
 		Solves: kr.solves, Factorizations: pb.pc.count,
 	}
 	knorm, bnorm := norm1(pb.kmat), norm1(pb.b2)
