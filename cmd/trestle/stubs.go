@@ -11,4 +11,3 @@ func runMaterials(e env) error { return errors.New("not yet") }
 func runSections(e env) error  { return errors.New("not yet") }
 func runGenerate(e env) error  { return errors.New("not yet") }
 func runExport(e env) error    { return errors.New("not yet") }
-func runDraw(e env) error      { return errors.New("not yet") }

@@ -1,0 +1,159 @@
+package main
+
+import (
+	"fmt"
+	"io"
+	"math"
+	"path/filepath"
+	"strings"
+
+	"github.com/trestle-go/trestle/materials"
+	"github.com/trestle-go/trestle/springnet"
+	"github.com/trestle-go/trestle/springnet/draw"
+)
+
+// sceneOf builds the picture of an analysed model: the geometry, the
+// deflection of case c magnified, members coloured by utilisation.
+func sceneOf(a *analysed, c springnet.CaseID, scale float64) draw.Scene {
+	m := a.model
+	s := draw.FromModel(m)
+	cr := a.static.Case(c)
+	for i := range s.Nodes {
+		d := cr.Displacement(springnet.NodeID(i))
+		s.Nodes[i].Move = draw.Point{X: d.UX, Y: d.UY, Z: d.UZ}
+	}
+	for i := range s.Mounts {
+		d := cr.At(springnet.MountID(i))
+		s.Mounts[i].Move = draw.Point{X: d.UX, Y: d.UY, Z: d.UZ}
+	}
+	// Members in FromModel order: every element that is not a foot.
+	k := 0
+	for e := 0; e < m.NumElements(); e++ {
+		id := springnet.ElementID(e)
+		if m.ElementKind(id) == springnet.FootKind {
+			continue
+		}
+		f := cr.Force(id)
+		if f.Utilisation != 0 {
+			s.Members[k].Value, s.Members[k].Rated = math.Abs(f.Utilisation), true
+		}
+		k++
+	}
+	s.Title = fmt.Sprintf("%s — case %q", a.report.Model, cr.Name())
+	s.Colours = draw.Colours{Name: "utilisation", Max: 1, Percent: true}
+	s.Shape = fmt.Sprintf("deflection under %q", cr.Name())
+	s.Scale = scale
+	s.Notes = []string{
+		"Linear elastic, small-displacement model. Check anchoring, tipping, floor capacity and local codes; defer to licensed engineering practice.",
+	}
+	if len(a.report.Pending) > 0 {
+		s.Notes = append(s.Notes, "Beams are grey until springnet's member checks rate them.")
+	}
+	return s
+}
+
+// pictureFormat returns "svg" or "png" from a file name's extension.
+func pictureFormat(path, override string) (string, error) {
+	f := strings.ToLower(override)
+	if f == "" {
+		f = strings.TrimPrefix(strings.ToLower(filepath.Ext(path)), ".")
+	}
+	switch f {
+	case "svg", "png":
+		return f, nil
+	}
+	return "", fmt.Errorf("picture %s: say .svg or .png (or --format svg|png)", path)
+}
+
+// writeScene writes s as SVG or PNG.
+func writeScene(w io.Writer, s *draw.Scene, format string) error {
+	if format == "png" {
+		return s.PNG(w)
+	}
+	return s.SVG(w)
+}
+
+func runDraw(e env) error {
+	fl := newFlags("draw", "trestle draw [flags] FILE",
+		`Draws the stand in FILE ("-": standard input; "demo": the built-in demo)
+in front, side, top and isometric views, with the deflection of one load
+case magnified over the unloaded outline and members coloured by
+utilisation, and writes it as SVG or PNG (by the extension of --out).
+Feet, supports and mounts are marked and named; the legend states the
+magnification.`,
+		"trestle draw --out stand.svg stand.toml\ntrestle draw --case \"side push\" --out demo.png demo", e)
+	out := fl.String("out", "", "picture `file` to write (.svg or .png); required")
+	format := fl.String("format", "", "`svg` or png; default from the --out extension")
+	caseName := fl.String("case", "", "load case to show; default the first")
+	scale := fl.Float64("scale", 0, "displacement magnification; 0 chooses one")
+	level := fl.String("level", "nominal", "material values: `low`, nominal or high")
+	pos, err := fl.parse(e.args)
+	if err != nil {
+		return handled(err)
+	}
+	if err := fl.wantArgs(pos, 1, 1); err != nil {
+		return err
+	}
+	if *out == "" {
+		return fmt.Errorf("draw: say where to write the picture with --out FILE.svg or FILE.png")
+	}
+	fmtName, err := pictureFormat(*out, *format)
+	if err != nil {
+		return err
+	}
+	if !(*scale >= 0) || math.IsInf(*scale, 0) {
+		return fmt.Errorf("draw: --scale %g: want a finite factor >= 0", *scale)
+	}
+	if err := checkNotInput(*out, pos[0]); err != nil {
+		return err
+	}
+	l, err := parseLevel(*level)
+	if err != nil {
+		return err
+	}
+	m, name, err := loadModel(pos[0], e.stdin)
+	if err != nil {
+		return err
+	}
+	a, err := analyse(m, name, l)
+	if err != nil {
+		return err
+	}
+	c, err := findCase(m, *caseName)
+	if err != nil {
+		return err
+	}
+	s := sceneOf(a, c, *scale)
+	if err := writeAtomic(*out, pos, func(w io.Writer) error { return writeScene(w, &s, fmtName) }); err != nil {
+		return err
+	}
+	fmt.Fprintf(e.stdout, "wrote %s (%s, case %q, displacements ×%.3g)\n", *out, fmtName, m.CaseName(c), effectiveScale(&s))
+	return nil
+}
+
+func effectiveScale(s *draw.Scene) float64 {
+	if s.Scale > 0 {
+		return s.Scale
+	}
+	return s.AutoScale()
+}
+
+// findCase returns the case named name, or the first case for "".
+func findCase(m *springnet.Model, name string) (springnet.CaseID, error) {
+	if name == "" {
+		if m.NumCases() == 0 {
+			return 0, fmt.Errorf("the model has no load cases")
+		}
+		return 0, nil
+	}
+	if c, ok := m.Case(name); ok {
+		return c, nil
+	}
+	var names []string
+	for i := 0; i < m.NumCases(); i++ {
+		names = append(names, fmt.Sprintf("%q", m.CaseName(springnet.CaseID(i))))
+	}
+	return 0, fmt.Errorf("no load case %q; the model has %s", name, strings.Join(names, ", "))
+}
+
+var _ = materials.Nominal
