@@ -117,11 +117,11 @@ func (v view) depth(p Point) float64 {
 
 // frame maps a view's model-plane coordinates into its panel.
 type frame struct {
-	s          float64 // px per m
-	u0, w0     float64 // model-plane point at the panel's reference pixel
-	px, py     float64 // reference pixel
-	x0, y0     float64 // panel corner
-	pw, ph     float64 // panel size
+	s      float64 // px per m
+	u0, w0 float64 // model-plane point at the panel's reference pixel
+	px, py float64 // reference pixel
+	x0, y0 float64 // panel corner
+	pw, ph float64 // panel size
 }
 
 func (f frame) at(u, w float64) pt { return pt{f.px + (u-f.u0)*f.s, f.py - (w-f.w0)*f.s} }
