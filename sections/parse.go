@@ -75,7 +75,7 @@ func kinds() []kindInfo {
 
 // aliases maps other common names to shape keywords.
 var aliases = map[string]string{
-	"rectangle": "rect", "bar": "round", "rod": "round",
+	"rectangle": "rect", "rod": "round",
 	"chs": "round-tube", "shs": "square-tube", "rhs": "rect-tube",
 	"tube": "round-tube", "i-beam": "i-shape", "ibeam": "i-shape",
 	"cmu": "block", "timber": "lumber",
