@@ -27,9 +27,9 @@ func build(name string, c *Contents) (*File, error) {
 	}
 	b := &builder{c: c, el: el, m: &springnet.Model{},
 		f: &File{Contents: *c, Name: name,
-			Nodes: map[string]springnet.NodeID{}, Elements: map[string]springnet.ElementID{},
-			Groups: map[string]springnet.GroupID{}, Mounts: map[string]springnet.MountID{},
-			Cases: map[string]springnet.CaseID{}},
+			NodeIDs: map[string]springnet.NodeID{}, ElementIDs: map[string]springnet.ElementID{},
+			GroupIDs: map[string]springnet.GroupID{}, MountIDs: map[string]springnet.MountID{},
+			CaseIDs: map[string]springnet.CaseID{}},
 		mats: map[string]materials.Material{}, secs: map[string]sections.Section{},
 		badSec: map[string]bool{}, lines: map[string]int{}}
 	b.f.Model = b.m
@@ -99,7 +99,7 @@ func (b *builder) run() {
 	}
 	var nodeNames []string
 	for _, n := range c.Nodes {
-		if _, dup := b.f.Nodes[n.Name]; dup {
+		if _, dup := b.f.NodeIDs[n.Name]; dup {
 			b.el.add(n.Line, "node %q is defined twice", n.Name)
 			continue
 		}
@@ -107,12 +107,12 @@ func (b *builder) run() {
 			b.el.add(n.Line, "a node has an empty name")
 			continue
 		}
-		b.f.Nodes[n.Name] = m.AddNode(n.Name, n.At)
+		b.f.NodeIDs[n.Name] = m.AddNode(n.Name, n.At)
 		b.setLine("node", n.Name, n.Line)
 		nodeNames = append(nodeNames, n.Name)
 	}
 	node := func(line int, what, n string) (springnet.NodeID, bool) {
-		id, ok := b.f.Nodes[n]
+		id, ok := b.f.NodeIDs[n]
 		if !ok {
 			b.el.add(line, "%s names unknown node %q%s", what, n, suggest(n, nodeNames))
 		}
@@ -175,7 +175,7 @@ func (b *builder) run() {
 	}
 	for _, g := range c.Groups {
 		what := fmt.Sprintf("rigid group %q", g.Name)
-		if _, dup := b.f.Groups[g.Name]; dup {
+		if _, dup := b.f.GroupIDs[g.Name]; dup {
 			b.el.add(g.Line, "%s is defined twice", what)
 			continue
 		}
@@ -195,7 +195,7 @@ func (b *builder) run() {
 		} else {
 			id = m.AddRigidGroup(g.Name, ids...)
 		}
-		b.f.Groups[g.Name] = id
+		b.f.GroupIDs[g.Name] = id
 		b.setLine("rigid group", g.Name, g.Line)
 	}
 	for _, s := range c.Supports {
@@ -213,7 +213,7 @@ func (b *builder) run() {
 	}
 	for _, mt := range c.Mounts {
 		what := fmt.Sprintf("mount %q", mt.Name)
-		if _, dup := b.f.Mounts[mt.Name]; dup {
+		if _, dup := b.f.MountIDs[mt.Name]; dup {
 			b.el.add(mt.Line, "%s is defined twice", what)
 			continue
 		}
@@ -221,7 +221,7 @@ func (b *builder) run() {
 		if p == nil {
 			continue
 		}
-		b.f.Mounts[mt.Name] = m.AddMount(mt.Name, mt.At, p)
+		b.f.MountIDs[mt.Name] = m.AddMount(mt.Name, mt.At, p)
 		b.setLine("mount", mt.Name, mt.Line)
 	}
 	for i, ms := range c.Masses {
@@ -240,12 +240,12 @@ func (b *builder) run() {
 		m.AddMass(p, springnet.Mass{Kg: ms.Kg, Offset: off, Inertia: ms.Inertia})
 	}
 	for _, lc := range c.Cases {
-		if _, dup := b.f.Cases[lc.Name]; dup {
+		if _, dup := b.f.CaseIDs[lc.Name]; dup {
 			b.el.add(lc.Line, "case %q is defined twice", lc.Name)
 			continue
 		}
 		id := m.AddLoadCase(lc.Name)
-		b.f.Cases[lc.Name] = id
+		b.f.CaseIDs[lc.Name] = id
 		b.setLine("case", lc.Name, lc.Line)
 		if lc.Gravity != (springnet.Vec{}) {
 			m.SetGravity(id, lc.Gravity)
@@ -263,14 +263,14 @@ func (b *builder) run() {
 	}
 	for _, cb := range c.Combos {
 		what := fmt.Sprintf("combination %q", cb.Name)
-		if _, dup := b.f.Cases[cb.Name]; dup {
+		if _, dup := b.f.CaseIDs[cb.Name]; dup {
 			b.el.add(cb.Line, "%s: the name is already used by a case or combination", what)
 			continue
 		}
 		var terms []springnet.Term
 		ok := true
 		for _, t := range cb.Terms {
-			id, found := b.f.Cases[t.Case]
+			id, found := b.f.CaseIDs[t.Case]
 			if !found || m.IsCombination(id) {
 				b.el.add(cb.Line, "%s names unknown case %q%s", what, t.Case, suggest(t.Case, caseNames))
 				ok = false
@@ -281,7 +281,7 @@ func (b *builder) run() {
 		if !ok {
 			continue
 		}
-		b.f.Cases[cb.Name] = m.AddCombination(cb.Name, terms...)
+		b.f.CaseIDs[cb.Name] = m.AddCombination(cb.Name, terms...)
 		b.setLine("combination", cb.Name, cb.Line)
 	}
 	for _, sp := range c.Dynamics.Speeds {
@@ -292,8 +292,8 @@ func (b *builder) run() {
 }
 
 func (b *builder) named(kind, name string, line int, id springnet.ElementID) {
-	if _, dup := b.f.Elements[name]; !dup {
-		b.f.Elements[name] = id
+	if _, dup := b.f.ElementIDs[name]; !dup {
+		b.f.ElementIDs[name] = id
 	}
 	b.setLine(kind, name, line)
 }
@@ -350,13 +350,13 @@ func (b *builder) place(line int, what, name string, mounts bool) springnet.Plac
 		}
 	}
 	var found []springnet.Place
-	if id, ok := b.f.Nodes[name]; ok && (kind == "" || kind == "node") {
+	if id, ok := b.f.NodeIDs[name]; ok && (kind == "" || kind == "node") {
 		found = append(found, id)
 	}
-	if id, ok := b.f.Groups[name]; ok && (kind == "" || kind == "group") {
+	if id, ok := b.f.GroupIDs[name]; ok && (kind == "" || kind == "group") {
 		found = append(found, id)
 	}
-	if id, ok := b.f.Mounts[name]; ok && mounts && (kind == "" || kind == "mount") {
+	if id, ok := b.f.MountIDs[name]; ok && mounts && (kind == "" || kind == "mount") {
 		found = append(found, id)
 	}
 	switch len(found) {
@@ -364,16 +364,16 @@ func (b *builder) place(line int, what, name string, mounts bool) springnet.Plac
 		return found[0]
 	case 0:
 		var all []string
-		for n := range b.f.Nodes {
+		for n := range b.f.NodeIDs {
 			all = append(all, n)
 		}
-		for n := range b.f.Groups {
+		for n := range b.f.GroupIDs {
 			all = append(all, n)
 		}
 		kinds := "node or rigid group"
 		if mounts {
 			kinds = "node, rigid group or mount"
-			for n := range b.f.Mounts {
+			for n := range b.f.MountIDs {
 				all = append(all, n)
 			}
 		}

@@ -22,11 +22,12 @@ type File struct {
 	Name  string           // the file name given to Read, used in messages
 	Model *springnet.Model // built from Contents; validated
 
-	Nodes    map[string]springnet.NodeID
-	Elements map[string]springnet.ElementID // named members and feet
-	Groups   map[string]springnet.GroupID
-	Mounts   map[string]springnet.MountID
-	Cases    map[string]springnet.CaseID // load cases and combinations
+	// Handles of the model's items by name.
+	NodeIDs    map[string]springnet.NodeID
+	ElementIDs map[string]springnet.ElementID // members and feet, by the model's name
+	GroupIDs   map[string]springnet.GroupID
+	MountIDs   map[string]springnet.MountID
+	CaseIDs    map[string]springnet.CaseID // load cases and combinations
 }
 
 // Read reads a model file (see the package documentation for the format)
@@ -80,6 +81,11 @@ func Parse(name string, data []byte) (*Contents, error) {
 		msg := err.Error()
 		if pe, ok := err.(toml.ParseError); ok {
 			line = pe.Position.Line
+			if st := pe.Position.Start; st > 0 && st <= len(data) {
+				// Count lines ourselves: an error at a line's end
+				// (a missing "]") belongs to that line, not the next.
+				line = 1 + bytes.Count(data[:st], []byte("\n"))
+			}
 			msg = pe.Message
 		}
 		el.add(line, "syntax: %s", strings.TrimPrefix(msg, "toml: "))

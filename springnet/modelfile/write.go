@@ -259,6 +259,8 @@ func (wr *writer) material(d MaterialDef) {
 	}
 	n := 0
 	line := func(k, v string) { wr.p("%s = %s\n", k, v); n++ }
+	differs := m.E != base.E || m.G != base.G || m.Poisson != base.Poisson || m.Density != base.Density ||
+		m.Yield != base.Yield || m.Compress != base.Compress || m.Loss != base.Loss || m.MassOnly != base.MassOnly
 	if m.E != base.E {
 		line("E", wr.rng(m.E, qStress))
 	}
@@ -268,7 +270,7 @@ func (wr *writer) material(d MaterialDef) {
 	if m.Poisson != base.Poisson || d.From == "" {
 		line("poisson", wr.num(m.Poisson, qNone))
 	}
-	if m.Density != base.Density || d.From == "" || (n == 0 && m.Name != base.Name) {
+	if m.Density != base.Density || d.From == "" || (!differs && m.Name != base.Name) {
 		line("density", wr.num(m.Density, qDensity))
 	}
 	if m.Yield != base.Yield {
