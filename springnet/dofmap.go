@@ -172,7 +172,7 @@ func prepare(m *Model, l materials.Level) (*net, error) {
 			reach[e.a] |= Translations
 			reach[e.b] |= Translations
 		case BeamKind:
-			bm := &e.beam
+			bm := e.beam
 			p.frame, err = element.NewFrame(m.nodes[e.a].at.arr(), m.nodes[e.b].at.arr(), bm.Up.arr(), bm.Roll)
 			if err == nil {
 				p.mp, err = resolveMember(bm.Material, bm.Section, bm.Raw, l, bm.Timoshenko)
@@ -191,7 +191,7 @@ func prepare(m *Model, l materials.Level) (*net, error) {
 				p.rotB = true
 			}
 		case SpringKind:
-			s := &e.spring
+			s := e.spring
 			f := scaleAt(s.Vary, l)
 			for c, v := range s.K.arr() {
 				p.k6[c] = v * f

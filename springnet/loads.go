@@ -124,6 +124,6 @@ func (nt *net) gravityLoads(i int, g Vec) []nodalLoad {
 // fixedEnds reports whether beam i has no releases and no end springs, so
 // that its consistent line loads apply.
 func (nt *net) fixedEnds(i int) bool {
-	bm := &nt.m.elems[i].beam
+	bm := nt.m.elems[i].beam
 	return bm.ReleaseA == 0 && bm.ReleaseB == 0 && bm.SpringA == (Vec{}) && bm.SpringB == (Vec{})
 }

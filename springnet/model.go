@@ -88,10 +88,10 @@ func (k ElementKind) String() string {
 type elem struct {
 	kind   ElementKind
 	a, b   NodeID // b is -1 for a foot
-	bar    Bar
-	spring Spring
-	foot   Foot
-	beam   Beam
+	bar    *Bar // the one for kind is set
+	spring *Spring
+	foot   *Foot
+	beam   *Beam
 }
 
 func (e *elem) name() string {
@@ -222,7 +222,7 @@ func (m *Model) AddBar(a, b NodeID, bar Bar) ElementID {
 	if bar.Name == "" {
 		bar.Name = fmt.Sprintf("B%d", len(m.elems))
 	}
-	return m.addElem(elem{kind: BarKind, a: a, b: b, bar: bar})
+	return m.addElem(elem{kind: BarKind, a: a, b: b, bar: &bar})
 }
 
 // AddSpring adds a two-node spring from a to b. An empty Name gives "S<i>".
@@ -230,7 +230,7 @@ func (m *Model) AddSpring(a, b NodeID, s Spring) ElementID {
 	if s.Name == "" {
 		s.Name = fmt.Sprintf("S%d", len(m.elems))
 	}
-	return m.addElem(elem{kind: SpringKind, a: a, b: b, spring: s})
+	return m.addElem(elem{kind: SpringKind, a: a, b: b, spring: &s})
 }
 
 // AddFoot adds a spring from node n to the ground (the floor). An empty
@@ -239,7 +239,7 @@ func (m *Model) AddFoot(n NodeID, f Foot) ElementID {
 	if f.Name == "" {
 		f.Name = fmt.Sprintf("F%d", len(m.elems))
 	}
-	return m.addElem(elem{kind: FootKind, a: n, b: -1, foot: f})
+	return m.addElem(elem{kind: FootKind, a: n, b: -1, foot: &f})
 }
 
 // AddBeam adds a 3D beam from a to b. An empty Name gives "M<i>".
@@ -247,7 +247,7 @@ func (m *Model) AddBeam(a, b NodeID, bm Beam) ElementID {
 	if bm.Name == "" {
 		bm.Name = fmt.Sprintf("M%d", len(m.elems))
 	}
-	return m.addElem(elem{kind: BeamKind, a: a, b: b, beam: bm})
+	return m.addElem(elem{kind: BeamKind, a: a, b: b, beam: &bm})
 }
 
 // NumElements returns the number of elements; handles run from 0 to
@@ -285,19 +285,36 @@ func (m *Model) Element(name string) (ElementID, bool) {
 }
 
 // BarOf returns the data of element e if it is a bar.
-func (m *Model) BarOf(e ElementID) (Bar, bool) { x := m.el(e); return x.bar, x.kind == BarKind }
+func (m *Model) BarOf(e ElementID) (Bar, bool) {
+	if x := m.el(e); x.kind == BarKind {
+		return *x.bar, true
+	}
+	return Bar{}, false
+}
 
 // SpringOf returns the data of element e if it is a spring.
 func (m *Model) SpringOf(e ElementID) (Spring, bool) {
-	x := m.el(e)
-	return x.spring, x.kind == SpringKind
+	if x := m.el(e); x.kind == SpringKind {
+		return *x.spring, true
+	}
+	return Spring{}, false
 }
 
 // FootOf returns the data of element e if it is a foot.
-func (m *Model) FootOf(e ElementID) (Foot, bool) { x := m.el(e); return x.foot, x.kind == FootKind }
+func (m *Model) FootOf(e ElementID) (Foot, bool) {
+	if x := m.el(e); x.kind == FootKind {
+		return *x.foot, true
+	}
+	return Foot{}, false
+}
 
 // BeamOf returns the data of element e if it is a beam.
-func (m *Model) BeamOf(e ElementID) (Beam, bool) { x := m.el(e); return x.beam, x.kind == BeamKind }
+func (m *Model) BeamOf(e ElementID) (Beam, bool) {
+	if x := m.el(e); x.kind == BeamKind {
+		return *x.beam, true
+	}
+	return Beam{}, false
+}
 
 // AddRigidGroup adds a rigid group: the nodes move together as one rigid
 // body (a thick top plate, a machine bed), imposed exactly by eliminating

@@ -83,9 +83,8 @@ func (m *Model) Validate() error {
 	for i := range m.elems {
 		e := &m.elems[i]
 		name := e.name()
-		what := fmt.Sprintf("%v %q", e.kind, name)
 		if seen[name] {
-			add("%s: duplicate element name", what)
+			add("%v %q: duplicate element name", e.kind, name)
 		}
 		seen[name] = true
 		used[e.a] = true
@@ -93,7 +92,7 @@ func (m *Model) Validate() error {
 			used[e.b] = true
 		}
 		for _, err := range m.checkElem(e) {
-			add("%s: %v", what, err)
+			add("%v %q: %v", e.kind, name, err)
 		}
 	}
 
@@ -199,7 +198,7 @@ func (m *Model) checkElem(e *elem) []error {
 			break
 		}
 		checkRange("loss factor", e.beam.Loss)
-		bm := &e.beam
+		bm := e.beam
 		if !bm.Up.finite() || !finite(bm.Roll) || !bm.SpringA.finite() || !bm.SpringB.finite() {
 			bad("up vector, roll or end springs not finite")
 			break
@@ -225,7 +224,7 @@ func (m *Model) checkElem(e *elem) []error {
 			}
 		}
 	case SpringKind:
-		s := &e.spring
+		s := e.spring
 		checkRange("loss factor", s.Loss)
 		checkRange("stiffness factor (Vary)", s.Vary)
 		if s.Vary != (materials.Range{}) && s.Vary.Low <= 0 {
@@ -263,7 +262,7 @@ func (m *Model) checkElem(e *elem) []error {
 			}
 		}
 	case FootKind:
-		f := &e.foot
+		f := e.foot
 		checkRange("loss factor", f.Loss)
 		checkRange("stiffness factor (Vary)", f.Vary)
 		if f.Vary != (materials.Range{}) && f.Vary.Low <= 0 {

@@ -1,0 +1,63 @@
+package springnet_test
+
+import (
+	"errors"
+	"fmt"
+	"log"
+	"math"
+
+	"github.com/trestle-go/trestle/materials"
+	"github.com/trestle-go/trestle/sections"
+	"github.com/trestle-go/trestle/springnet"
+)
+
+// A four-leg steel stand with a rigid top plate on levelling feet: the
+// stiffness a machine feels at its mount, in N/µm.
+func Example() {
+	const mm = 1e-3
+	steel, err := materials.Lookup("steel S235")
+	if err != nil {
+		log.Fatal(err)
+	}
+	leg := sections.RoundTube{D: 60.3 * mm, T: 4 * mm}
+	const w, d, h = 0.8, 0.6, 0.85 // footprint and height [m] (demo data)
+
+	var m springnet.Model
+	var tops []springnet.NodeID
+	for i, c := range [4][2]float64{{0, 0}, {w, 0}, {w, d}, {0, d}} {
+		foot := m.AddNode(fmt.Sprintf("foot%d", i+1), springnet.Vec{X: c[0], Y: c[1]})
+		top := m.AddNode(fmt.Sprintf("top%d", i+1), springnet.Vec{X: c[0], Y: c[1], Z: h})
+		m.AddBeam(foot, top, springnet.Beam{Name: fmt.Sprintf("leg%d", i+1), Material: steel, Section: leg})
+		// A levelling foot on a concrete floor (demo stiffnesses).
+		m.AddFoot(foot, springnet.Foot{K: springnet.Stiffness6{X: 2e7, Y: 2e7, Z: 3e8}})
+		tops = append(tops, top)
+	}
+	plate := m.AddRigidGroup("top", tops...)
+	spindle := m.AddMount("spindle", springnet.Vec{X: w / 2, Y: d / 2, Z: h + 0.1}, plate)
+
+	st, err := springnet.MountStiffness(&m, spindle, nil)
+	var mech *springnet.MechanismError
+	switch {
+	case errors.As(err, &mech):
+		log.Fatalf("the stand is a mechanism at %s in %v", mech.Name, mech.DOF)
+	case err != nil:
+		log.Fatal(err)
+	}
+	fmt.Printf("X: %.4g N/µm\n", springnet.NPerMicron(st.Along(springnet.Vec{X: 1})))
+	fmt.Printf("Y: %.4g N/µm\n", springnet.NPerMicron(st.Along(springnet.Vec{Y: 1})))
+	fmt.Printf("Z: %.4g N/µm\n", springnet.NPerMicron(st.Along(springnet.Vec{Z: 1})))
+	k, dir := st.Principal()
+	axis := "X"
+	if math.Abs(dir[0].Y) > math.Abs(dir[0].X) {
+		axis = "Y"
+	}
+	if math.Abs(dir[0].Z) > math.Max(math.Abs(dir[0].X), math.Abs(dir[0].Y)) {
+		axis = "Z"
+	}
+	fmt.Printf("softest: %.4g N/µm, mostly along %s\n", springnet.NPerMicron(k[0]), axis)
+	// Output:
+	// X: 1.123 N/µm
+	// Y: 1.111 N/µm
+	// Z: 441.8 N/µm
+	// softest: 1.111 N/µm, mostly along Y
+}
