@@ -79,7 +79,7 @@ type bucklingOp struct {
 func (op *bucklingOp) apply(dst, x, _ []float64) error {
 	op.kg.MulVec(op.t, x)
 	if res := op.pc.solve(dst, op.t); !(res <= solveResidualTol) {
-		return fmt.Errorf("eigen: solve with K has relative residual %.3g", res)
+		return fmt.Errorf("eigen: solve with K has backward error %.3g", res)
 	}
 	return nil
 }

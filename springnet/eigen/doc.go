@@ -69,10 +69,11 @@
 //
 // Each returned pair carries its relative residual
 //
-//	‖K·φ − λ·M·φ‖₂ / (‖K‖₁ · ‖φ‖₂)
+//	‖K·φ − λ·M·φ‖₂ / ((‖K‖₁ + |λ|·‖M‖₁) · ‖φ‖₂)
 //
-// (‖K‖₁ the largest absolute column sum, an upper bound of ‖K‖₂ for a
-// symmetric K; for buckling ‖K·φ + λ·Kg·φ‖₂ / (‖K‖₁‖φ‖₂)). A residual above
+// (‖·‖₁ the largest absolute column sum, an upper bound of ‖·‖₂ for a
+// symmetric matrix; for buckling ‖K·φ + λ·Kg·φ‖₂ / ((‖K‖₁ + |λ|·‖Kg‖₁)·‖φ‖₂)),
+// the normwise backward error of the pair. A residual above
 // Settings.ResidualTol is a *ResidualError. Errors start with "eigen:" and
 // are typed where a caller can act on them: *MissedModesError,
 // *SingularError (a DOF with neither stiffness nor mass, or a K that is not

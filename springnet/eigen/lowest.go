@@ -73,21 +73,12 @@ func Lowest(K, M *sparse.Matrix, n int, s *Settings) (*Result, error) {
 		scale:      scale,
 	}
 	pb.toLambda = func(t float64) float64 { return pb.shift + 1/t }
-	// Factorise at σ; when singular there (σ an eigenvalue, or a DOF with
-	// neither stiffness nor mass), move the shift further down.
+	// Factorise at σ; factorAt moves the shift when K − σM is singular
+	// there (σ an eigenvalue) and reports a DOF with neither stiffness nor
+	// mass as a *SingularError.
 	var err error
-	for try := 0; ; try++ {
-		var neg int
-		pb.shift, neg, err = pb.factorAt(sigma, math.Inf(-1), math.Inf(1))
-		if err == nil {
-			pb.below = neg
-			break
-		}
-		var se *SingularError
-		if !errors.As(err, &se) || try == 2 {
-			return nil, err
-		}
-		sigma = 10*sigma - DefaultShiftFraction*scale
+	if pb.shift, pb.below, err = pb.factorAt(sigma, math.Inf(-1), math.Inf(1)); err != nil {
+		return nil, err
 	}
 	if !st.ShiftSet && pb.below > 0 {
 		return nil, fmt.Errorf("eigen: Lowest: K − σM has %d negative pivots at σ = %.6g < 0: K or M is not positive semidefinite", pb.below, pb.shift)

@@ -19,6 +19,7 @@ type pencil struct {
 	opt      sparse.Options
 	a        *sparse.Matrix // the matrix last factorised successfully
 	alpha    float64        // its α
+	anorm    float64        // its 1-norm
 	ok       bool
 	analyzed bool
 	count    int // numeric factorisations
@@ -69,55 +70,60 @@ func (pc *pencil) factor(alpha float64) error {
 	if err := pc.f.Factorize(a); err != nil {
 		return err
 	}
-	pc.a, pc.alpha = a, alpha
+	pc.a, pc.alpha, pc.anorm = a, alpha, norm1(a)
 	// Guard the factorisation without pivoting: solve with a fixed
-	// right-hand side and check the residual.
+	// right-hand side and check the backward error.
 	b := make([]float64, a.N())
 	for i := range b {
 		b[i] = 1 + float64(i%7)/7
 	}
-	pc.f.Solve(pc.x, b)
-	if res := sparse.Residual(a, pc.x, b); !(res <= factorResidualTol) {
+	x := make([]float64, a.N())
+	if eta := pc.solve(x, b); !(eta <= factorResidualTol) {
 		return errUnstable
 	}
 	pc.ok = true
 	return nil
 }
 
-// factorResidualTol is the largest relative residual ‖A·x − b‖/‖b‖ of the
-// check solve accepted after a factorisation. LDLᵀ without pivoting of an
-// indefinite matrix can lose accuracy through pivot growth; a residual
-// above this means the factors (and their inertia) are not trusted.
-const factorResidualTol = 1e-8
+// factorResidualTol is the largest normwise backward error
+// ‖A·x − b‖ / (‖A‖₁‖x‖ + ‖b‖) of the check solve accepted after a
+// factorisation. LDLᵀ without pivoting of an indefinite matrix can lose
+// accuracy through pivot growth, which shows in the backward error; above
+// this the factors (and their inertia) are not trusted. A stable
+// factorisation gives about 1e-16.
+const factorResidualTol = 1e-10
 
 var errUnstable = errors.New("eigen: unstable factorisation (large solve residual)")
 
 // solve sets dst = A⁻¹·b for the last factorisation, with one step of
-// iterative refinement when the residual is not small, and returns the
-// relative residual.
+// iterative refinement when the backward error is not small, and returns
+// the normwise backward error ‖A·x − b‖₂ / (‖A‖₁‖x‖₂ + ‖b‖₂).
 func (pc *pencil) solve(dst, b []float64) float64 {
 	pc.f.Solve(dst, b)
-	r := pc.r
-	pc.a.MulVec(r, dst)
-	floats.Sub(r, b) // r = A·x − b
-	bn := floats.Norm(b, 2)
-	if bn == 0 {
-		return 0
-	}
-	res := floats.Norm(r, 2) / bn
-	if res > 1e-12 {
-		pc.f.Solve(pc.x, r)
+	eta := pc.backward(dst, b)
+	if eta > 1e-14 {
+		pc.f.Solve(pc.x, pc.r)
 		floats.Sub(dst, pc.x)
-		pc.a.MulVec(r, dst)
-		floats.Sub(r, b)
-		res = floats.Norm(r, 2) / bn
+		eta = pc.backward(dst, b)
 	}
-	return res
+	return eta
 }
 
-// solveResidualTol is the largest relative residual of a Lanczos solve
+// backward sets pc.r = A·x − b and returns the normwise backward error.
+func (pc *pencil) backward(x, b []float64) float64 {
+	r := pc.r
+	pc.a.MulVec(r, x)
+	floats.Sub(r, b)
+	den := pc.anorm*floats.Norm(x, 2) + floats.Norm(b, 2)
+	if den == 0 {
+		return 0
+	}
+	return floats.Norm(r, 2) / den
+}
+
+// solveResidualTol is the largest backward error of a Lanczos solve
 // accepted after refinement.
-const solveResidualTol = 1e-8
+const solveResidualTol = 1e-10
 
 // shiftInvert is OP = (K − σM)⁻¹·M, self-adjoint in the M-inner product.
 type shiftInvert struct {

@@ -58,6 +58,7 @@ func (pb *problem) factorAt(lam, limLo, limHi float64) (float64, int, error) {
 	// Fractions of the distance to the limits to try after lam itself.
 	tries := []float64{0, 0.5, -0.5, 0.25, -0.25, 0.75, -0.75, 0.1, -0.1}
 	var lastErr error
+	failCol, fails := -1, 0
 	for _, t := range tries {
 		x := lam
 		switch {
@@ -82,6 +83,16 @@ func (pb *problem) factorAt(lam, limLo, limHi float64) (float64, int, error) {
 		lastErr = err
 		if pe != nil {
 			lastErr = &SingularError{Col: pe.Col, Shift: x, What: pb.what}
+			// The same column failing at three shifts is singular at
+			// every shift: a DOF with neither stiffness nor mass.
+			if pe.Col == failCol {
+				fails++
+			} else {
+				failCol, fails = pe.Col, 1
+			}
+			if fails == 3 {
+				break
+			}
 		}
 	}
 	return 0, 0, lastErr
@@ -146,6 +157,9 @@ func (pb *problem) run(kr *krylov, n int, st *Settings) ([]pair, *ritz, sturm, e
 			return nil, nil, sturm{}, err
 		}
 		want = len(keep) + (chk.count - chk.found)
+		if want > kr.mmax-kr.p {
+			return nil, nil, chk, &MissedModesError{Low: chk.lo, High: chk.hi, Count: chk.count, Found: chk.found}
+		}
 	}
 }
 
@@ -178,7 +192,8 @@ func (pb *problem) check(all []pair, lo, hi float64) (sturm, error) {
 	if sigma2 >= next {
 		sigma2 = 0.5 * (top + next)
 	}
-	sigma2, c2, err := pb.factorAt(sigma2, top, next)
+	limHi := math.Min(next, top+2*delta)
+	sigma2, c2, err := pb.factorAt(sigma2, top, limHi)
 	if err != nil {
 		return c, err
 	}
@@ -202,7 +217,8 @@ func (pb *problem) check(all []pair, lo, hi float64) (sturm, error) {
 		if sigma1 <= prev {
 			sigma1 = 0.5 * (bot + prev)
 		}
-		if sigma1, c1, err = pb.factorAt(sigma1, prev, bot); err != nil {
+		limLo := math.Max(prev, bot-2*delta)
+		if sigma1, c1, err = pb.factorAt(sigma1, limLo, bot); err != nil {
 			return c, err
 		}
 	}
