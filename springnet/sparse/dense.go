@@ -36,7 +36,7 @@ func (w *gemmWork) gemmNT(r, c, k int, a []float64, lda int, b []float64, ldb in
 }
 
 // panelWidth is the number of pivots factorised together in partialLDLT.
-const panelWidth = 64
+const panelWidth = 32
 
 // partialLDLT eliminates the first k of the m rows/columns of a
 // symmetric front held as its first k columns f (m×k, row-major, lower
@@ -45,7 +45,7 @@ const panelWidth = 64
 // factor columns, d[:k] the pivots, and ub the Schur complement. w must hold at least max(panelWidth², k·panelWidth, (m−k)·k) values.
 // Each pivot j is checked by pc.checkPivot(c0+j, ·); an error stops the
 // factorisation.
-func partialLDLT(f, ub []float64, m, k int, d, w []float64, gw *gemmWork, pc *Factor, c0 int) error {
+func partialLDLT(f, ub []float64, m, k int, d, w []float64, gw gemmPool, pc *Factor, c0 int) error {
 	ld := k
 	for p0 := 0; p0 < k; p0 += panelWidth {
 		p1 := min(p0+panelWidth, k)

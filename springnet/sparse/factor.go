@@ -107,7 +107,7 @@ type Factor struct {
 	front   []float64
 	stack   []float64
 	work    []float64
-	gw      *gemmWork
+	gw      gemmPool
 	y       []float64
 	ok      bool
 	neg     int
@@ -304,7 +304,7 @@ func (f *Factor) analyzePerm(a *Matrix, perm0 []int) error {
 	f.stack = make([]float64, stackMax)
 	f.work = make([]float64, maxWork)
 	if f.gw == nil {
-		f.gw = newGemmWork()
+		f.gw = newGemmPool()
 	}
 	f.y = make([]float64, n)
 	return nil

@@ -59,3 +59,36 @@ func TestGemmPacked(t *testing.T) {
 		}
 	}
 }
+
+// TestGemmPoolSplit checks the row split between goroutines against the
+// single-workspace multiply (same tile sums, so the same bits per entry).
+func TestGemmPoolSplit(t *testing.T) {
+	rng := rand.New(rand.NewPCG(1, 1))
+	pool := gemmPool{newGemmWork(), newGemmWork(), newGemmWork()}
+	for _, lower := range []bool{false, true} {
+		r, c, k := 301, 301, 90
+		if !lower {
+			c = 157
+		}
+		a := make([]float64, r*k)
+		b := make([]float64, c*k)
+		cc := make([]float64, r*c)
+		for _, x := range [][]float64{a, b, cc} {
+			for i := range x {
+				x[i] = rng.Float64() - 0.5
+			}
+		}
+		want := append([]float64(nil), cc...)
+		pool[0].gemmPacked(r, c, k, a, k, b, k, want, c, lower)
+		pool.gemmNT(r, c, k, a, k, b, k, cc, c, lower)
+		bad := 0
+		for i := 0; i < r; i++ {
+			for j := 0; j < c; j++ {
+				if (!lower || j <= i) && math.Abs(cc[i*c+j]-want[i*c+j]) > float64(k)*1e-15 {
+					bad++
+				}
+			}
+		}
+		assert.Zero(t, bad, "lower=%v", lower)
+	}
+}
