@@ -60,8 +60,8 @@ func kinds() []kindInfo {
 		{"round", parseRound, "solid round bar, diameter", "round 40 mm"},
 		{"flat", parseFlat, "flat bar lying flat, width x thickness", "flat 50x10 mm"},
 		{"round-tube", parseRoundTube, "circular hollow section, outside diameter x wall; aisc: design wall 0.93t", "round-tube 60.3x3.2 mm"},
-		{"square-tube", parseSquareTube, "square hollow section, side x wall; r= outer corner radius, aisc or en10219 conventions", "square-tube 50x3 mm r=6"},
-		{"rect-tube", parseRectTube, "rectangular hollow section, depth (z) x width (y) x wall; r=, aisc, en10219", "rect-tube 100x50x4 mm en10219"},
+		{"square-tube", parseSquareTube, "square hollow section, side x wall; sharp corners unless r= (outer corner radius), aisc (design wall 0.93t, r = 2t) or en10219 (EN 10219-2 radii)", "square-tube 50x3 mm r=6"},
+		{"rect-tube", parseRectTube, "rectangular hollow section, depth (z) x width (y) x wall; r=, aisc, en10219 as for square-tube", "rect-tube 100x50x4 mm en10219"},
 		{"pipe", parsePipe, "steel pipe by nominal size (1/2 to 8 in) and schedule (sch10, sch40, sch80, sch160, std, xs), ASME B36.10M", "pipe 2in sch40"},
 		{"angle", parseAngle, "angle, leg (y) x leg (z) x thickness; r= root radius", "angle 50x50x5 mm r=7"},
 		{"channel", parseChannel, "channel with parallel flanges, depth x flange width x web x flange; r= root radius", "channel 100x50x6x8.5 mm"},
@@ -148,6 +148,9 @@ func parse(spec string) (Section, error) {
 		}
 	}
 	p.kind, p.toks = main[0], main[1:]
+	if p.kind == "filled" {
+		return nil, errors.New("\"filled\" given twice")
+	}
 	if a, ok := aliases[p.kind]; ok {
 		p.kind = a
 	}

@@ -142,6 +142,7 @@ func TestParseBad(t *testing.T) {
 		{"filled square-tube 100x5 mm with unobtainium", "no material"},
 		{"filled square-tube 100x5 mm of sand with sand", "no stiffness"},
 		{"filled", "needs a tube"},
+		{"filled filled round-tube 60x3 mm with sand", "twice"},
 		{"with concrete", "before the shape"},
 		{"general A=1cm2 Iy=1cm4 Iz=1cm4", "J= is missing"},
 		{"general A=1cm4 Iy=1cm4 Iz=1cm4 J=1cm4", "power 2"},
