@@ -88,7 +88,7 @@ func (k ElementKind) String() string {
 type elem struct {
 	kind   ElementKind
 	a, b   NodeID // b is -1 for a foot
-	bar    *Bar // the one for kind is set
+	bar    *Bar   // the one for kind is set
 	spring *Spring
 	foot   *Foot
 	beam   *Beam
