@@ -20,8 +20,6 @@ var cautions = []string{
 // this build; the report says so instead of leaving them out silently.
 var pendingAnalyses = []string{
 	"natural frequencies and modal damping (springnet modes: not in this build yet)",
-	"buckling load factors (springnet buckling: not in this build yet)",
-	"member checks with bending for beams (springnet member checks: not in this build yet; bars are rated on axial stress)",
 }
 
 // elementLabel is the name of element e, or "<kind> #<i>" when it has none.
@@ -101,6 +99,7 @@ func analyse(m *springnet.Model, name string, l materials.Level) (*analysed, err
 	for c := 0; c < res.NumCases(); c++ {
 		rep.Cases = append(rep.Cases, caseReport(m, res.Case(springnet.CaseID(c))))
 	}
+	rep.Buckling, rep.Warnings = buckling(m, l, rep.Warnings)
 	rep.Governing = governing(rep)
 	rep.Warnings = append(rep.Warnings, alerts(rep)...)
 	return &analysed{model: m, static: res, report: rep}, nil
@@ -208,6 +207,11 @@ func caseReport(m *springnet.Model, cr *springnet.CaseResult) CaseReport {
 			FXN: f.Reaction.FX, FYN: f.Reaction.FY, FZN: f.Reaction.FZ, Share: f.Share,
 			Uplift: f.Uplift && !f.Lifted, Lifted: f.Lifted})
 	}
+	members, err := cr.MembersTo(nil, nil)
+	if err != nil {
+		members = nil // default settings cannot fail; keep the axial forces below
+	}
+	next := 0
 	for e := 0; e < m.NumElements(); e++ {
 		id := springnet.ElementID(e)
 		k := m.ElementKind(id)
@@ -215,12 +219,48 @@ func caseReport(m *springnet.Model, cr *springnet.CaseResult) CaseReport {
 			continue
 		}
 		f := cr.Force(id)
-		mr := MemberReport{Name: elementLabel(m, id), Kind: k.String(), AxialN: f.Axial, StressPa: f.Stress,
-			Utilisation: f.Utilisation, Rated: f.Utilisation != 0}
-		r.Members = append(r.Members, mr)
-		if math.Abs(f.Utilisation) > r.MaxUtilisation {
-			r.MaxUtilisation, r.MaxUtilisationMember = math.Abs(f.Utilisation), mr.Name
+		mr := MemberReport{Name: elementLabel(m, id), Kind: k.String(), AxialN: f.Axial}
+		if k == springnet.SpringKind {
+			mr.AxialN = f.Axial
+		} else if next < len(members) && members[next].Element == id {
+			x := members[next]
+			next++
+			mr.AxialN = x.A.N
+			mr.MaxMomentNm = math.Max(math.Hypot(x.A.My, x.A.Mz), math.Hypot(x.B.My, x.B.Mz))
+			if x.Stressed {
+				mr.TensionPa, mr.CompressionPa = x.Tension, x.Compression
+			}
+			mr.Utilisation, mr.Governs, mr.Rated = x.Utilisation, x.Governs, x.Governs != ""
+			if b := x.Buckling; b.Rated && b.Compressed && b.Margin > 0 {
+				mr.EulerMargin = b.Margin
+				mr.EulerK = b.KY
+				if b.PcrZ < b.PcrY {
+					mr.EulerK = b.KZ
+				}
+				if r.EulerMember == "" || b.Margin < r.EulerMargin {
+					r.EulerMargin, r.EulerMember = b.Margin, mr.Name
+				}
+			}
 		}
+		r.Members = append(r.Members, mr)
+		if mr.Utilisation > r.MaxUtilisation {
+			r.MaxUtilisation, r.MaxUtilisationMember = mr.Utilisation, mr.Name
+		}
+	}
+	// Forces and stresses below roundOff × the largest in the case are
+	// round-off.
+	var maxN, maxM, maxS float64
+	for _, mr := range r.Members {
+		maxN = math.Max(maxN, math.Abs(mr.AxialN))
+		maxM = math.Max(maxM, mr.MaxMomentNm)
+		maxS = math.Max(maxS, math.Max(mr.TensionPa, mr.CompressionPa))
+	}
+	for i := range r.Members {
+		mr := &r.Members[i]
+		mr.AxialN = cut(mr.AxialN, roundOff*maxN)
+		mr.MaxMomentNm = cut(mr.MaxMomentNm, roundOff*maxM)
+		mr.TensionPa = cut(mr.TensionPa, roundOff*maxS)
+		mr.CompressionPa = cut(mr.CompressionPa, roundOff*maxS)
 	}
 	// Motions below roundOff × the largest are round-off and print as 0.
 	tiny := roundOff * r.MaxDisplacementM
@@ -237,6 +277,38 @@ func caseReport(m *springnet.Model, cr *springnet.CaseResult) CaseReport {
 	tp := cr.Tipping()
 	r.Tipping = TippingReport{Found: tp.Found, Factor: tp.Factor, LastFoot: tp.LastFoot}
 	return r
+}
+
+// bucklingModes is how many whole-frame load factors each case reports.
+const bucklingModes = 3
+
+// buckling runs the whole-frame buckling analysis of every case.
+func buckling(m *springnet.Model, l materials.Level, warn []string) ([]BucklingReport, []string) {
+	out := []BucklingReport{}
+	for c := 0; c < m.NumCases(); c++ {
+		id := springnet.CaseID(c)
+		br := BucklingReport{Case: m.CaseName(id), Factors: []float64{}}
+		res, err := springnet.Buckling(m, id, &springnet.BucklingSettings{Modes: bucklingModes, Level: l})
+		var few *springnet.FewerFactorsError
+		var cond *springnet.ConditionError
+		switch {
+		case errors.As(err, &few) && res == nil:
+			br.Note = "nothing in compression can buckle under this case"
+			if few.Reversed > 0 {
+				br.Note += fmt.Sprintf("; reversed, it buckles at %.4g", few.Reversed)
+			}
+		case errors.As(err, &few), err == nil, errors.As(err, &cond) && res != nil:
+			if cond != nil {
+				warn = append(warn, "suspect buckling solve: "+err.Error())
+			}
+			br.Factors = res.FactorsTo(nil)
+		default:
+			br.Note = "not found: " + err.Error()
+			warn = append(warn, fmt.Sprintf("buckling of case %q: %v", br.Case, err))
+		}
+		out = append(out, br)
+	}
+	return out, warn
 }
 
 // governing picks the numbers a designer reads first from a report.
@@ -274,9 +346,17 @@ func governing(rep *AnalysisReport) Governing {
 		f := rep.Modes.Modes[0].FrequencyHz
 		g.FirstFrequencyHz = &f
 	}
-	if rep.Buckling != nil && len(rep.Buckling.Factors) > 0 {
-		f := rep.Buckling.Factors[0]
-		g.BucklingFactor, g.BucklingCase = &f, rep.Buckling.Case
+	for _, b := range rep.Buckling {
+		if len(b.Factors) > 0 && (g.BucklingFactor == nil || b.Factors[0] < *g.BucklingFactor) {
+			f := b.Factors[0]
+			g.BucklingFactor, g.BucklingCase = &f, b.Case
+		}
+	}
+	for _, c := range rep.Cases {
+		if c.EulerMember != "" && (g.EulerMargin == nil || c.EulerMargin < *g.EulerMargin) {
+			f := c.EulerMargin
+			g.EulerMargin, g.EulerMember, g.EulerCase = &f, c.EulerMember, c.Name
+		}
 	}
 	return g
 }

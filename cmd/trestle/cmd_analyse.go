@@ -24,7 +24,7 @@ utilisation, checks and cautions. Works from any folder.`,
 	if err != nil {
 		return err
 	}
-	m, name, err := loadDemo()
+	m, name, err := loadModel(demoArg, e.stdin)
 	if err != nil {
 		return err
 	}

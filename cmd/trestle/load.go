@@ -1,32 +1,63 @@
 package main
 
 import (
+	"bytes"
 	"fmt"
+	"io"
 	"strings"
 
 	"github.com/trestle-go/trestle/materials"
 	"github.com/trestle-go/trestle/springnet"
+	"github.com/trestle-go/trestle/springnet/modelfile"
 )
 
-// loadDemo returns the built-in demo model.
-func loadDemo() (*springnet.Model, string, error) {
-	m, err := demoModel()
+// demoArg is the file argument that names the built-in demo model.
+const demoArg = "demo"
+
+// loadDemo reads the demo model embedded in the modelfile package.
+func loadDemo() (*modelfile.File, error) {
+	f, err := modelfile.Read("demo", bytes.NewReader(modelfile.Demo()))
 	if err != nil {
-		return nil, "", fmt.Errorf("building the demo model: %w", err)
+		return nil, fmt.Errorf("the built-in demo model does not read: %w", err)
 	}
-	return m, demoName, nil
+	return f, nil
 }
 
-// loadModel reads the model file name ("-": standard input). The special
-// name "demo" is the built-in demo stand.
-func loadModel(name string, stdin interface{ Read([]byte) (int, error) }) (*springnet.Model, string, error) {
-	if name == "demo" {
+// loadFile reads the model file name ("-": standard input; "demo": the
+// built-in demo) and builds its model.
+func loadFile(name string, stdin io.Reader) (*modelfile.File, error) {
+	if name == demoArg {
 		return loadDemo()
 	}
-	if _, err := readInput(name, stdin); err != nil {
+	data, err := readInput(name, stdin)
+	if err != nil {
+		return nil, err
+	}
+	f, err := modelfile.Read(displayName(name), bytes.NewReader(data))
+	if err != nil {
+		return nil, err
+	}
+	return f, nil
+}
+
+// modelName is how reports name the model of f.
+func modelName(f *modelfile.File) string {
+	switch {
+	case f.Title != "" && f.Name != "":
+		return fmt.Sprintf("%s (%s)", f.Title, f.Name)
+	case f.Title != "":
+		return f.Title
+	}
+	return f.Name
+}
+
+// loadModel reads a model file and returns its model and report name.
+func loadModel(name string, stdin io.Reader) (*springnet.Model, string, error) {
+	f, err := loadFile(name, stdin)
+	if err != nil {
 		return nil, "", err
 	}
-	return nil, "", fmt.Errorf("%s: reading model files needs the model-file package (springnet/modelfile), which is not in this build yet; try the built-in model: trestle analyse demo", displayName(name))
+	return f.Model, modelName(f), nil
 }
 
 // parseLevel reads a --level value.

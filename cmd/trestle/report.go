@@ -80,9 +80,12 @@ func writeAnalysis(w io.Writer, r *AnalysisReport, u unitSystem) {
 		fmt.Fprintf(tw, "  highest utilisation\t—\tno rated member\n")
 	}
 	if g.BucklingFactor != nil {
-		fmt.Fprintf(tw, "  buckling factor\t%s\tcase %q\n", num(*g.BucklingFactor), g.BucklingCase)
+		fmt.Fprintf(tw, "  buckling factor (whole stand)\t%s\ton the loads of case %q\n", num(*g.BucklingFactor), g.BucklingCase)
 	} else {
-		fmt.Fprintf(tw, "  buckling factor\t—\tnot available in this build\n")
+		fmt.Fprintf(tw, "  buckling factor (whole stand)\t—\tnothing in compression can buckle\n")
+	}
+	if g.EulerMargin != nil {
+		fmt.Fprintf(tw, "  member Euler margin\t%s\t%s in case %q\n", num(*g.EulerMargin), g.EulerMember, g.EulerCase)
 	}
 	fmt.Fprintf(tw, "  largest displacement\t%s\tat %s in case %q\n", mo.fu(g.MaxDisplacementM), g.MaxDisplacementNode, g.MaxDisplacementCase)
 	switch {
@@ -107,6 +110,23 @@ func writeAnalysis(w io.Writer, r *AnalysisReport, u unitSystem) {
 		for _, mt := range r.Mounts {
 			fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n", mt.Name, k.f(mt.XNPerM), k.f(mt.YNPerM), k.f(mt.ZNPerM),
 				k.f(mt.PrincipalNPerM[0]), direction(mt.PrincipalDirection[0]), k.f(mt.PrincipalNPerM[2]), direction(mt.PrincipalDirection[2]))
+		}
+		tw.Flush()
+	}
+	if len(r.Buckling) > 0 {
+		heading(w, "WHOLE-STAND BUCKLING (load factors on each case's loads, self-weight included)")
+		tw = table(w)
+		fmt.Fprintf(tw, "  case\tlowest factors\tnote\n")
+		for _, b := range r.Buckling {
+			fs := make([]string, len(b.Factors))
+			for i, x := range b.Factors {
+				fs[i] = num(x)
+			}
+			list := strings.Join(fs, ", ")
+			if list == "" {
+				list = "—"
+			}
+			fmt.Fprintf(tw, "  %s\t%s\t%s\n", b.Case, list, b.Note)
 		}
 		tw.Flush()
 	}
@@ -171,15 +191,21 @@ func writeAnalysis(w io.Writer, r *AnalysisReport, u unitSystem) {
 			tw.Flush()
 		}
 		if len(c.Members) > 0 {
-			fmt.Fprintf(w, "\n  Members (axial force tension +) [%s, %s]\n", f.unit, s.unit)
+			mm := u.moment()
+			fmt.Fprintf(w, "\n  Members (axial force tension +; fibre stresses as magnitudes) [%s, %s, %s]\n", f.unit, mm.unit, s.unit)
 			tw = table(w)
-			fmt.Fprintf(tw, "  member\tkind\taxial\tstress\tutilisation\n")
+			fmt.Fprintf(tw, "  member\tkind\taxial\tmoment\tσ tension\tσ compr.\tutilisation\tEuler margin\n")
 			for _, mb := range c.Members {
 				ut := "not rated"
 				if mb.Rated {
-					ut = pct(mb.Utilisation)
+					ut = pct(mb.Utilisation) + " " + mb.Governs
 				}
-				fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\t%s\n", mb.Name, mb.Kind, f.f(mb.AxialN), s.f(mb.StressPa), ut)
+				eu := "—"
+				if mb.EulerMargin > 0 {
+					eu = num(mb.EulerMargin)
+				}
+				fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n", mb.Name, mb.Kind, f.f(mb.AxialN), mm.f(mb.MaxMomentNm),
+					s.f(mb.TensionPa), s.f(mb.CompressionPa), ut, eu)
 			}
 			tw.Flush()
 		}

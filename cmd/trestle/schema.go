@@ -26,7 +26,7 @@ type AnalysisReport struct {
 	Warnings  []string         `json:"warnings"`
 	Mounts    []MountStiffness `json:"mounts"`
 	Cases     []CaseReport     `json:"cases"`
-	Buckling  *BucklingReport  `json:"buckling,omitempty"`
+	Buckling  []BucklingReport `json:"buckling"`
 	Modes     *ModesReport     `json:"modes,omitempty"`
 	Pending   []string         `json:"pending"` // analyses this build cannot run yet
 	Cautions  []string         `json:"cautions"`
@@ -55,8 +55,11 @@ type Governing struct {
 	MaxUtilisation        float64    `json:"max_utilisation"`
 	MaxUtilisationMember  string     `json:"max_utilisation_member"`
 	MaxUtilisationCase    string     `json:"max_utilisation_case"`
-	BucklingFactor        *float64   `json:"buckling_factor"`
+	BucklingFactor        *float64   `json:"buckling_factor"` // lowest whole-frame load factor over the cases; null if none found
 	BucklingCase          string     `json:"buckling_case,omitempty"`
+	EulerMargin           *float64   `json:"euler_margin"` // lowest member Euler margin; null if no rated member is in compression
+	EulerMember           string     `json:"euler_member,omitempty"`
+	EulerCase             string     `json:"euler_case,omitempty"`
 	MaxDisplacementM      float64    `json:"max_displacement_m"`
 	MaxDisplacementNode   string     `json:"max_displacement_node"`
 	MaxDisplacementCase   string     `json:"max_displacement_case"`
@@ -85,6 +88,8 @@ type CaseReport struct {
 	MaxDisplacementNode  string            `json:"max_displacement_node"`
 	MaxUtilisation       float64           `json:"max_utilisation"`
 	MaxUtilisationMember string            `json:"max_utilisation_member"`
+	EulerMargin          float64           `json:"euler_margin"` // lowest member Euler margin in this case; 0 when none
+	EulerMember          string            `json:"euler_member"`
 	Feet                 []FootReport      `json:"feet"`
 	Supports             []SupportReport   `json:"supports"`
 	Members              []MemberReport    `json:"members"`
@@ -120,12 +125,17 @@ type SupportReport struct {
 
 // MemberReport is the force state of one bar, beam or spring.
 type MemberReport struct {
-	Name        string  `json:"name"`
-	Kind        string  `json:"kind"`        // bar, beam, spring
-	AxialN      float64 `json:"axial_n"`     // tension positive
-	StressPa    float64 `json:"stress_pa"`   // axial stress; 0 when the area is unknown
-	Utilisation float64 `json:"utilisation"` // 0 when not rated
-	Rated       bool    `json:"rated"`       // a utilisation was computed
+	Name          string  `json:"name"`
+	Kind          string  `json:"kind"`           // bar, beam, spring
+	AxialN        float64 `json:"axial_n"`        // at end a, tension positive
+	MaxMomentNm   float64 `json:"max_moment_nm"`  // largest bending moment at the ends, √(My² + Mz²)
+	TensionPa     float64 `json:"tension_pa"`     // largest tensile fibre stress (≥ 0); 0 when not computed
+	CompressionPa float64 `json:"compression_pa"` // largest compressive fibre stress as a magnitude (≥ 0)
+	Utilisation   float64 `json:"utilisation"`    // fibre stress over strength; 0 when not rated
+	Rated         bool    `json:"rated"`          // a utilisation was computed
+	Governs       string  `json:"governs"`        // "tension", "compression" or ""
+	EulerMargin   float64 `json:"euler_margin"`   // member Euler load over its compression; 0 when not in compression or not rated
+	EulerK        float64 `json:"euler_k"`        // effective-length factor of the weaker axis; 0 when none
 }
 
 // MountMotion is the displacement of a mount in one case.
@@ -151,10 +161,13 @@ type TippingReport struct {
 	LastFoot string  `json:"last_foot,omitempty"`
 }
 
-// BucklingReport holds the lowest buckling load factors.
+// BucklingReport holds the lowest whole-frame buckling load factors of
+// one load case: the factors on all of the case's loads (self-weight
+// included) at which the stand buckles.
 type BucklingReport struct {
 	Case    string    `json:"case"`
-	Factors []float64 `json:"factors"`
+	Factors []float64 `json:"factors"` // ascending; empty when none is positive
+	Note    string    `json:"note,omitempty"`
 }
 
 // ModesReport holds natural frequencies and modal damping.
