@@ -475,3 +475,38 @@ func TestLowestUserShift(t *testing.T) {
 		})
 	}
 }
+
+// TestManyRigidModes: four identical free-free chains, not connected, have
+// four rigid-body modes and every other eigenvalue four times, more than
+// the block size. All must be found (continuing after the Sturm check).
+func TestManyRigidModes(t *testing.T) {
+	const n, k, m, copies = 30, 1e4, 2.0, 4
+	N := copies * n
+	bk, bm := sparse.NewBuilder(N), sparse.NewBuilder(N)
+	for c := 0; c < copies; c++ {
+		o := c * n
+		for i := 1; i < n; i++ {
+			bk.Add(o+i-1, o+i-1, k)
+			bk.Add(o+i, o+i, k)
+			bk.Add(o+i, o+i-1, -k)
+		}
+	}
+	for i := 0; i < N; i++ {
+		bm.Add(i, i, m)
+	}
+	K, M := bk.Matrix(), bm.Matrix()
+	res, err := eigen.Lowest(K, M, 2*copies, nil)
+	require.NoError(t, err)
+	for i := 0; i < copies; i++ {
+		assert.True(t, res.RigidBody(i), "mode %d", i)
+	}
+	// Free-free chain (path Laplacian): ω₂ = 2√(k/m)·sin(π/(2n)), four times.
+	w := 2 * math.Sqrt(k/m) * math.Sin(math.Pi/float64(2*n))
+	for i := copies; i < 2*copies; i++ {
+		assert.False(t, res.RigidBody(i), "mode %d", i)
+		assert.InEpsilon(t, w*w, res.Values[i], freqTol, "mode %d", i)
+	}
+	assert.True(t, res.Checked)
+	assert.Equal(t, 2*copies, res.SturmCount)
+	assertMOrthonormal(t, res, M)
+}

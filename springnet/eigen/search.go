@@ -36,6 +36,10 @@ type problem struct {
 	scale float64
 }
 
+// maxContinuations bounds the restarts of the search after a Sturm check
+// found missed modes.
+const maxContinuations = 8
+
 // pair is a converged Ritz pair, by Ritz index.
 type pair struct {
 	lambda float64
@@ -102,6 +106,7 @@ func (pb *problem) factorAt(lam, limLo, limHi float64) (float64, int, error) {
 // Sturm count; it returns the chosen pairs in ascending order of λ.
 func (pb *problem) run(kr *krylov, n int, st *Settings) ([]pair, *ritz, sturm, error) {
 	want := n
+	missing := -1 // eigenvalues missed at the previous check
 	for attempt := 0; ; attempt++ {
 		rz, err := kr.iterate(want, st.MaxIter, st.Tol, pb.prio)
 		if err != nil {
@@ -133,7 +138,11 @@ func (pb *problem) run(kr *krylov, n int, st *Settings) ([]pair, *ritz, sturm, e
 		if err != nil {
 			return nil, nil, sturm{}, err
 		}
-		if chk.count == chk.found || chk.count < chk.found || attempt >= 2 {
+		// Each continuation finds at least one more copy of a repeated
+		// eigenvalue (up to a block); give up when one makes no progress.
+		stuck := missing >= 0 && chk.count-chk.found >= missing
+		missing = chk.count - chk.found
+		if chk.count <= chk.found || stuck || attempt >= maxContinuations {
 			sort.Slice(sel, func(a, b int) bool { return sel[a].lambda < sel[b].lambda })
 			if chk.count != chk.found {
 				return nil, nil, chk, &MissedModesError{Low: chk.lo, High: chk.hi, Count: chk.count, Found: chk.found}
