@@ -1,60 +1,80 @@
 // Package springnet models a machine stand as a 3D network of nodes joined
 // by bars, springs and beams, resting on supports and feet, and analyses it:
 // linear statics per load case and combination, compression-only feet with
-// lift-off and tipping margin, and mount stiffness (compliance and stiffness
-// matrices at the points where a machine sits).
+// lift-off and a tipping margin, and mount stiffness (compliance and
+// stiffness at the points where a machine sits).
 //
 // # Model
 //
 // The zero Model is empty and ready to use. Builder methods return handles
 // (NodeID, ElementID, GroupID, MountID, CaseID) and no errors; Validate
-// reports every data problem at once. A handle out of range is a
-// programming error and panics.
+// reports every data problem at once (errors.Join), each naming its item.
+// A handle out of range is a programming error and panics.
 //
 //	var m springnet.Model
 //	a := m.AddNode("A", springnet.Vec{})
 //	b := m.AddNode("B", springnet.Vec{Z: 0.8})
-//	m.AddBar(a, b, springnet.Bar{Material: steel, Section: tube})
+//	m.AddBeam(a, b, springnet.Beam{Material: steel, Section: tube})
 //	m.Fix(a, springnet.AllDOF)
-//	m.AddLoad(b, springnet.Load{FZ: -1e3})
+//	m.AddLoad(b, springnet.Load{FX: 500})  // to DefaultCase
 //	res, err := springnet.Static(&m, nil)
 //
-// Elements: Bar (pin-ended, EA/L), Spring (axial along a→b and/or per
-// global direction, rotational included), Foot (node to ground, optionally
-// compression-only), Beam (3D, Euler–Bernoulli or Timoshenko, releases and
-// end springs). Rigid groups tie nodes into one rigid body, imposed exactly
-// by eliminating their DOF onto a reference point with six DOF:
+// Elements: Bar (pin-ended, EA/L), Spring (axial along a→b, and per global
+// direction between coincident ends, rotations included), Foot (node to
+// ground, optionally CompressionOnly), Beam (3D, Euler–Bernoulli or
+// Timoshenko, releases and end springs; matrices from package element).
+// Members take a materials.Material and a sections.Section (a Composite
+// section uses each part's material), or raw numbers. Rigid groups tie
+// nodes into one rigid body, imposed exactly by eliminating their DOF onto
+// a reference point with six DOF (the centroid unless given):
 //
 //	u_s = u_m + θ_m × r,   θ_s = θ_m,   r = x_s − x_m
 //
-// (no stiff penalty members). Mounts are named points on a node, group or
-// mount; loads, masses and stiffness queries take a Place: a NodeID,
-// GroupID or MountID.
+// — never by stiff penalty members. Mounts are named points on a node,
+// group or mount. Loads, masses and stiffness queries take a Place: a
+// NodeID, a GroupID (at its reference point) or a MountID. Load cases hold
+// loads and a gravity vector (self-weight from density and section, plus
+// added masses); combinations are factored sums of cases, each solved as
+// its own load.
 //
 // # Units, axes, signs
 //
 // SI throughout: m, N, Pa, kg, s, rad. Global axes X, Y, Z with Z up; the
 // floor under feet is horizontal. Node DOF order UX, UY, UZ, RX, RY, RZ;
 // rotations by the right-hand rule. Loads and displacements are positive
-// along the axes. Axial forces are tension positive. A reaction is the force
-// the support or floor exerts on the stand (a foot carrying weight has a
-// positive FZ reaction).
+// along the axes. Axial forces are tension positive. A reaction is the
+// force the support or floor exerts on the stand (a foot carrying weight
+// has a positive FZ). Moments in the equilibrium check are about the
+// origin. NPerMicron and LbfPerInch convert stiffness for printing.
 //
 // # Degrees of freedom
 //
 // Every node touched by something carries translations. Rotations exist
 // only where something reaches them: a beam, a spring or foot with
-// rotational stiffness, a moment or an offset load or mass. A node that
-// only bars and axial springs touch has translations only, and its
-// unreachable rotations are not mechanisms. Nodes of a rigid group map onto
-// the group's six DOF. Fixed DOF are removed.
+// rotational stiffness, a moment, or a load or mass away from the node. A
+// node that only bars and axial springs touch has translations only, and
+// a rotation nothing reaches (a group turning about the line of its nodes)
+// is not a mechanism unless a load acts on it. Nodes of a rigid group map
+// onto the group's six DOF. Fixed DOF are removed.
+//
+// # Solving
+//
+// Solver assembles K over the free DOF into a sparse matrix, passes each
+// equation's point to the ordering, and keeps the symbolic factorisation
+// while the pattern is unchanged (a sweep over materials.Level, or feet
+// entering and leaving contact, refactorises only). Compression-only feet
+// are solved by an active-set loop of linear solves; the tipping margin
+// follows the contact path exactly (see Tipping). System exports K, the
+// lumped mass and the loads (Matrix Market).
 //
 // # Errors
 //
-// Errors start with "springnet:" and name the item. Validate joins every
-// data problem. A free motion (a mechanism) is a *MechanismError naming the
-// node or group and direction, with the motion described where found. A
-// solve whose relative residual exceeds MaxResidual returns its result with
-// a *ConditionError. A stand on compression-only feet with no stable
-// contact set is a *TippingError. No result holds NaN or Inf.
+// Errors start with "springnet:" and name the item. A free motion is a
+// *MechanismError naming the node or group and direction, with the motion
+// described where found, and the usual cure. A solve whose relative
+// residual exceeds MaxResidual returns its result with a *ConditionError.
+// A case under which a stand on compression-only feet has no stable
+// contact set is a *TippingError. No result holds NaN or Inf. Results
+// about tipping and overload are model results: check them against local
+// codes and licensed engineering practice.
 package springnet

@@ -11,8 +11,10 @@ import (
 )
 
 // maxDiagnosticPivots bounds the number of failing pivots the mechanism
-// diagnosis steps over before giving up on describing the motion.
-const maxDiagnosticPivots = 64
+// diagnosis steps over (one refactorisation each) before giving up on
+// describing the motion: a handful covers the usual cases (a sway, a
+// twist, a loose node) without making a large model's error slow.
+const maxDiagnosticPivots = 16
 
 // mechanism turns a failed pivot into a *MechanismError naming the node or
 // group and direction, and tries to describe the free motion: it adds a

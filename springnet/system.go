@@ -77,6 +77,27 @@ func (s *System) Equation(i int) (owner string, d DOF) {
 	return dm.ownerName(s.nt.m, dm.eqOwner[i]), dofAt(int(dm.eqComp[i]))
 }
 
+// EquationOf returns the equation of direction d (one bit) of place p: a
+// node's own DOF, or for a node in a rigid group or a GroupID the group's
+// DOF at its reference point. ok is false if that DOF is fixed or does
+// not exist (a rotation nothing reaches, or a grouped node's translation,
+// which is not an equation of its own).
+func (s *System) EquationOf(p Place, d DOF) (eq int, ok bool) {
+	s.nt.m.checkPlace(p)
+	dm := &s.nt.dm
+	o, at := dm.placeOwner(s.nt.m, p)
+	for c := 0; c < 6; c++ {
+		if d == dofAt(c) {
+			if c < 3 && at != dm.ownerRef[o] {
+				return -1, false
+			}
+			eq = dm.ownerEq[o][c]
+			return eq, eq >= 0
+		}
+	}
+	return -1, false
+}
+
 // Point returns the point in space of equation i's node or group [m].
 func (s *System) Point(i int) Vec { return vecOf(s.nt.dm.coords[i]) }
 
