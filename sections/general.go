@@ -10,7 +10,8 @@ var _ Section = General{}
 // General is a section given directly by its properties, for shapes not
 // in the catalogue. A, Iy, Iz and J are required; shear areas may be 0
 // (shear-rigid) and CY, CZ may be 0 (section moduli then 0, "not known").
-// Iy and Iz are taken as principal (Iyz = 0).
+// Iy and Iz are taken as principal (Iyz = 0). It has no geometry, so its
+// Props.Outline is empty.
 type General struct {
 	A        float64 // area [m²]
 	Iy, Iz   float64 // second moments [m⁴]
