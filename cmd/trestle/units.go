@@ -144,7 +144,7 @@ func (q quantity) f(v float64) string { return num(v * q.factor) }
 func (q quantity) fu(v float64) string { return num(v*q.factor) + " " + q.unit }
 
 // num formats v with four significant figures, without an exponent
-// between 0.001 and 10⁷, and never as NaN (printed "—").
+// between 0.0001 and 10⁷, and never as NaN (printed "—").
 func num(v float64) string {
 	switch {
 	case math.IsNaN(v) || math.IsInf(v, 0):
@@ -153,7 +153,7 @@ func num(v float64) string {
 		return "0"
 	}
 	a := math.Abs(v)
-	if a >= 1e-3 && a < 1e7 {
+	if a >= 1e-4 && a < 1e7 {
 		digits := 3 - int(math.Floor(math.Log10(a)))
 		if digits < 0 {
 			digits = 0
