@@ -326,3 +326,44 @@ func TestBucklingAgainstDense(t *testing.T) {
 		})
 	}
 }
+
+func TestBucklingSwayUnderHeavyMachine(t *testing.T) {
+	// A tall stand: two columns of height h, fixed at the floor, under a
+	// rigid top (rigid group) carrying a heavy machine (a mass under
+	// gravity). The top cannot turn (group rotations held, standing for
+	// axially rigid columns), so each column buckles fixed–guided, K = 1
+	// (AISC 360 Commentary Table C-A-7.1, theoretical), and the stand sways
+	// at W_cr = 2·π²EI/h² (Timoshenko & Gere, Theory of Elastic
+	// Stability). The lowest mode is a sideways sway of the top.
+	const h, w, ei, mass = 2.4, 1.0, 2e5, 3000.0
+	var m springnet.Model
+	var tops []springnet.NodeID
+	for _, x := range []float64{0, w} {
+		prev := m.AddNode("", springnet.Vec{X: x})
+		m.Fix(prev, springnet.AllDOF)
+		for i := 1; i <= 8; i++ {
+			n := m.AddNode("", springnet.Vec{X: x, Z: h * float64(i) / 8})
+			// Weak axis (EIz) bends in X for a vertical member (local y
+			// is global X with the default up); the strong axis is 4×.
+			m.AddBeam(prev, n, springnet.Beam{Raw: springnet.RawBeam{EA: 1e10, EIy: 4 * ei, EIz: ei, GJ: ei}})
+			prev = n
+		}
+		tops = append(tops, prev)
+	}
+	g := m.AddRigidGroup("top", tops...)
+	m.FixGroup(g, springnet.Rotations)
+	m.AddMass(g, springnet.Mass{Kg: mass, Offset: springnet.Vec{Z: 0.3}})
+	m.SetGravity(springnet.DefaultCase, springnet.Gravity(1))
+	res, err := springnet.Buckling(&m, springnet.DefaultCase, &springnet.BucklingSettings{Modes: 2})
+	require.NoError(t, err)
+	want := 2 * math.Pi * math.Pi * ei / (h * h) / (mass * springnet.StandardGravity)
+	assert.InEpsilon(t, want, res.Factor(0), eulerTol)
+	sh := res.Shape(0, g)
+	assert.InDelta(t, 1, sh.UX, 1e-12, "sway along X, normalised to 1")
+	assert.InDelta(t, 0, sh.UY, 1e-9)
+	// The second mode sways along Y about the strong axis: 4× the load.
+	assert.InEpsilon(t, 4*want, res.Factor(1), eulerTol)
+	pts := res.MemberShape(nil, 0, 7, 5, 1)
+	require.Len(t, pts, 5)
+	assert.InDelta(t, 1, pts[4].X, 1e-9, "the column's top follows the sway")
+}

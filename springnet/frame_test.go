@@ -185,3 +185,45 @@ func TestWeldedTableRacking(t *testing.T) {
 		assert.NotZero(t, mech.DOF&springnet.Translations, "it racks: a translation is free")
 	})
 }
+
+func TestRigidTopOnBeamLegsMountLoad(t *testing.T) {
+	// Four fixed legs under a rigid top (a machine bed: rigid group at the
+	// legs' tops), a sideways force F at a mount in the plane of the top,
+	// offset e in Y from the centre. The top translates by
+	// F / (4·12EI/h³) (four fixed–guided legs) and twists about Z by
+	// F·e / k_θ with k_θ = Σ (12EI/h³)·rᵢ² + 4·GJ/h: each leg's top moves
+	// sideways by θ·rᵢ and twists by θ (rigid-body kinematics of the top;
+	// Timoshenko & Gere for the leg stiffnesses).
+	const h, a, b, ei, gj = 0.9, 1.0, 0.6, 4e4, 3e4
+	const f, ecc = 2e3, 0.25
+	var m springnet.Model
+	var tops []springnet.NodeID
+	for i, c := range [4][2]float64{{0, 0}, {a, 0}, {a, b}, {0, b}} {
+		base := m.AddNode(fmt.Sprintf("foot %d", i), springnet.Vec{X: c[0], Y: c[1]})
+		top := m.AddNode(fmt.Sprintf("top %d", i), springnet.Vec{X: c[0], Y: c[1], Z: h})
+		m.Fix(base, springnet.AllDOF)
+		raw := frameRaw(ei, h)
+		raw.GJ = gj
+		m.AddBeam(base, top, springnet.Beam{Raw: raw})
+		tops = append(tops, top)
+	}
+	g := m.AddRigidGroup("bed", tops...)
+	mt := m.AddMount("spindle", springnet.Vec{X: a / 2, Y: b/2 + ecc, Z: h}, g)
+	m.AddLoad(mt, springnet.Load{FX: f})
+	res, err := springnet.Static(&m, nil)
+	require.NoError(t, err)
+	cr := res.Case(springnet.DefaultCase)
+	kLeg := 12 * ei / (h * h * h)
+	r2 := (a/2)*(a/2) + (b/2)*(b/2)
+	kTwist := 4*kLeg*r2 + 4*gj/h
+	d := cr.At(g)
+	assert.InEpsilon(t, f/(4*kLeg), d.UX, frameTol)
+	assert.InEpsilon(t, -f*ecc/kTwist, d.RZ, frameTol)
+	// The mount moves with the top: u = u_g + θ × r.
+	dm := cr.At(mt)
+	assert.InEpsilon(t, d.UX-d.RZ*ecc, dm.UX, frameTol)
+	// Each leg carries its share of shear; the base reactions balance F.
+	eq := cr.Equilibrium()
+	assert.Less(t, eq.ForceError, 1e-9)
+	assert.Less(t, eq.MomentError, 1e-9)
+}
