@@ -83,7 +83,8 @@ func reduceByMass(K *mat.SymDense, chM *mat.Cholesky) ([]float64, [][]float64, e
 	N := K.SymmetricDim()
 	linv := choleskyInverse(chM)
 	var c mat.Dense
-	c.Product(linv, K, linv.T())
+	ld := mat.DenseCopyOf(linv)
+	c.Product(ld, K, ld.T())
 	vals, z, err := eigSym(&c)
 	if err != nil {
 		return nil, nil, err
@@ -201,7 +202,8 @@ func reduceByShiftedK(K, M *mat.SymDense, shift float64) ([]float64, [][]float64
 	}
 	linv := choleskyInverse(&chA)
 	var c mat.Dense
-	c.Product(linv, M, linv.T())
+	ld := mat.DenseCopyOf(linv)
+	c.Product(ld, M, ld.T())
 	vals, z, err := eigSym(&c)
 	if err != nil {
 		return nil, nil, err
@@ -239,7 +241,8 @@ func DenseBuckling(K, Kg *mat.SymDense, n int) (*Result, error) {
 	}
 	linv := choleskyInverse(&ch)
 	var c mat.Dense
-	c.Product(linv, Kg, linv.T())
+	ld := mat.DenseCopyOf(linv)
+	c.Product(ld, Kg, ld.T())
 	vals, z, err := eigSym(&c)
 	if err != nil {
 		return nil, err

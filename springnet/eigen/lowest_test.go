@@ -510,3 +510,22 @@ func TestManyRigidModes(t *testing.T) {
 	assert.Equal(t, 2*copies, res.SturmCount)
 	assertMOrthonormal(t, res, M)
 }
+
+// TestFiftyModes: n = 50 needs several thick restarts of a basis holding
+// more than the wanted vectors; compare with the dense reference.
+func TestFiftyModes(t *testing.T) {
+	rng := rand.New(rand.NewPCG(1, 1))
+	c := randomNetwork(rng, 400, true, false, 0)
+	ref := denseAll(t, c.k, c.m)
+	const nev = 50
+	res, err := eigen.Lowest(c.k, c.m, nev, nil)
+	require.NoError(t, err)
+	require.Equal(t, nev, res.Len())
+	for i := 0; i < nev; i++ {
+		assert.InEpsilon(t, ref[i], res.Values[i], freqTol, "mode %d", i)
+		assert.Less(t, res.Residuals[i], residTol)
+	}
+	assert.True(t, res.Checked)
+	assert.Equal(t, nev, res.SturmCount)
+	assertMOrthonormal(t, res, c.m)
+}
