@@ -529,3 +529,24 @@ func TestFiftyModes(t *testing.T) {
 	assert.Equal(t, nev, res.SturmCount)
 	assertMOrthonormal(t, res, c.m)
 }
+
+// TestShiftAtEigenvalue: a user shift of exactly 0 on a free-free chain
+// makes K − σM = K singular (the rigid-body mode); Lowest moves the shift
+// and still returns the right modes.
+func TestShiftAtEigenvalue(t *testing.T) {
+	const n, k, m = 50, 1e5, 1.5
+	K, M := chain(n, k, m, false)
+	res, err := eigen.Lowest(K, M, 4, &eigen.Settings{Shift: 0, ShiftSet: true})
+	require.NoError(t, err)
+	assert.NotEqual(t, 0.0, res.Shift, "the shift must have been moved")
+	assert.True(t, res.RigidBody(0))
+	for j := 2; j <= 4; j++ {
+		// Free-free chain closed form (path Laplacian, see TestChainClosedForm).
+		w := 2 * math.Sqrt(k/m) * math.Sin(float64(j-1)*math.Pi/float64(2*n))
+		assert.InEpsilon(t, w*w, res.Values[j-1], freqTol, "mode %d", j)
+	}
+	assert.True(t, res.Checked)
+	_, err = eigen.CountBelow(K, M, 0)
+	var se *eigen.SingularError
+	assert.ErrorAs(t, err, &se, "K − 0·M is singular")
+}
