@@ -58,9 +58,12 @@ func New(nx, ny, nz int, p *Params) (*Lattice, error) {
 			}
 		}
 	}
-	for name, v := range map[string]float64{"H": prm.H, "E": prm.E, "A": prm.A, "Rho": prm.Rho} {
-		if !(v > 0) || math.IsInf(v, 0) {
-			return nil, fmt.Errorf("lattice: parameter %s = %g: must be positive and finite", name, v)
+	for _, p := range []struct {
+		name string
+		v    float64
+	}{{"H", prm.H}, {"E", prm.E}, {"A", prm.A}, {"Rho", prm.Rho}} {
+		if !(p.v > 0) || math.IsInf(p.v, 0) {
+			return nil, fmt.Errorf("lattice: parameter %s = %g: must be positive and finite", p.name, p.v)
 		}
 	}
 	n64 := 3 * int64(nx+1) * int64(ny+1) * int64(nz)

@@ -5,10 +5,14 @@ import (
 	"encoding/binary"
 	"encoding/hex"
 	"math"
+	"os"
+	"path/filepath"
 	"testing"
 
 	"github.com/stretchr/testify/assert"
 	"github.com/stretchr/testify/require"
+
+	"github.com/trestle-go/trestle/springnet/sparse"
 )
 
 func digestK(l *Lattice) string {
@@ -67,6 +71,53 @@ func TestDigests(t *testing.T) {
 			assert.Equal(t, tc.k, digestK(l), "sha256_K")
 			assert.Equal(t, tc.m, digestVec(l.Mass), "sha256_M")
 			assert.Equal(t, tc.b, digestVec(l.Load), "sha256_b")
+		})
+	}
+}
+
+// TestWriteFilesDigests writes the 4×3×5 lattice, parses the files back
+// and checks the parsed values against the definition's digests (the
+// README's bit-identity is of the parsed values).
+func TestWriteFilesDigests(t *testing.T) {
+	l, err := New(4, 3, 5, nil)
+	require.NoError(t, err)
+	prefix := filepath.Join(t.TempDir(), "lat")
+	require.NoError(t, l.WriteFiles(prefix))
+	read := func(name string) *os.File {
+		f, err := os.Open(name)
+		require.NoError(t, err)
+		t.Cleanup(func() { f.Close() })
+		return f
+	}
+	k, err := sparse.ReadMatrix(read(prefix + ".mtx"))
+	require.NoError(t, err)
+	m, err := sparse.ReadVector(read(prefix + "_mass.mtx"))
+	require.NoError(t, err)
+	b, err := sparse.ReadVector(read(prefix + "_load.mtx"))
+	require.NoError(t, err)
+	back := &Lattice{K: k, Mass: m, Load: b}
+	// Digests from ../shared/perf/README.md, row 4×3×5.
+	assert.Equal(t, "a88294f5df96f482c0116e9021fd2146e51e96fc0c0452892fae041a7ea133c6", digestK(back))
+	assert.Equal(t, "4180b265ebea4cdb04620bdf86ae23e3634f9323f65d6bb7f9a900caf5cdc3bf", digestVec(back.Mass))
+	assert.Equal(t, "85d6f97c95ab8535a3433e7726b3d2b955c5763a45b6804c2b878770ea7b1dbb", digestVec(back.Load))
+}
+
+// TestNewRejectsBadInput checks the errors for sizes and parameters.
+func TestNewRejectsBadInput(t *testing.T) {
+	for _, tc := range []struct {
+		name       string
+		nx, ny, nz int
+		p          *Params
+		want       string
+	}{
+		{"zero size", 0, 2, 2, nil, "lattice: size 0×2×2"},
+		{"negative E", 2, 2, 2, &Params{E: -1}, "lattice: parameter E = -1"},
+		{"NaN h", 2, 2, 2, &Params{H: math.NaN()}, "lattice: parameter H = NaN"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			_, err := New(tc.nx, tc.ny, tc.nz, tc.p)
+			require.Error(t, err)
+			assert.Contains(t, err.Error(), tc.want)
 		})
 	}
 }

@@ -2,6 +2,8 @@ package sparse
 
 import (
 	"fmt"
+	"math"
+	"slices"
 	"sort"
 )
 
@@ -98,61 +100,73 @@ func (b *Builder) Reset(n int) {
 	b.i, b.j, b.v = b.i[:0], b.j[:0], b.v[:0]
 }
 
+// grow makes room for n more entries.
+func (b *Builder) grow(n int) {
+	b.i = slices.Grow(b.i, n)
+	b.j = slices.Grow(b.j, n)
+	b.v = slices.Grow(b.v, n)
+}
+
 // Matrix returns the assembled matrix, duplicates summed. Explicit zeros
 // that were added are kept, so the pattern depends only on the positions
-// added, not on the values.
+// added, not on the values. The Builder keeps its entries.
 func (b *Builder) Matrix() *Matrix {
+	// Two counting sorts, by row then stably by column, leave every
+	// column's rows in order; duplicates are then adjacent.
 	n := b.n
-	count := make([]int, n+1)
+	nnz := len(b.i)
+	rp := make([]int, n+1)
+	for _, i := range b.i {
+		rp[i+1]++
+	}
+	for i := 0; i < n; i++ {
+		rp[i+1] += rp[i]
+	}
+	byRow := make([]int32, nnz)
+	if nnz > math.MaxInt32 {
+		panic("sparse: too many entries")
+	}
+	for k, i := range b.i {
+		byRow[rp[i]] = int32(k)
+		rp[i]++
+	}
+	cp := rp // reuse for column counts
+	clear(cp)
 	for _, j := range b.j {
-		count[j+1]++
+		cp[j+1]++
 	}
 	for j := 0; j < n; j++ {
-		count[j+1] += count[j]
+		cp[j+1] += cp[j]
 	}
-	rows := make([]int, len(b.i))
-	vals := make([]float64, len(b.i))
-	next := append([]int(nil), count[:n]...)
-	for k, j := range b.j {
-		p := next[j]
-		rows[p] = b.i[k]
-		vals[p] = b.v[k]
+	next := make([]int, n)
+	copy(next, cp[:n])
+	rows := make([]int, nnz)
+	vals := make([]float64, nnz)
+	for _, k := range byRow {
+		j := b.j[k]
+		q := next[j]
 		next[j]++
+		rows[q] = b.i[k]
+		vals[q] = b.v[k]
 	}
-	m := &Matrix{n: n, colPtr: make([]int, n+1)}
-	m.rowIdx = make([]int, 0, len(rows))
-	m.val = make([]float64, 0, len(rows))
-	mark := make([]int, n)
-	for i := range mark {
-		mark[i] = -1
-	}
+	// Sum adjacent duplicates, compacting in place.
+	colPtr := make([]int, n+1)
+	w := 0
 	for j := 0; j < n; j++ {
-		start := len(m.rowIdx)
-		for p := count[j]; p < count[j+1]; p++ {
-			i := rows[p]
-			if mark[i] >= start {
-				m.val[mark[i]] += vals[p]
+		for q := cp[j]; q < cp[j+1]; q++ {
+			if w > colPtr[j] && rows[w-1] == rows[q] {
+				vals[w-1] += vals[q]
 				continue
 			}
-			mark[i] = len(m.rowIdx)
-			m.rowIdx = append(m.rowIdx, i)
-			m.val = append(m.val, vals[p])
+			rows[w] = rows[q]
+			vals[w] = vals[q]
+			w++
 		}
-		seg := colSorter{m.rowIdx[start:], m.val[start:]}
-		sort.Sort(seg)
-		m.colPtr[j+1] = len(m.rowIdx)
+		colPtr[j+1] = w
 	}
-	return m
-}
-
-type colSorter struct {
-	r []int
-	v []float64
-}
-
-func (s colSorter) Len() int           { return len(s.r) }
-func (s colSorter) Less(a, b int) bool { return s.r[a] < s.r[b] }
-func (s colSorter) Swap(a, b int) {
-	s.r[a], s.r[b] = s.r[b], s.r[a]
-	s.v[a], s.v[b] = s.v[b], s.v[a]
+	if w < nnz*3/4 {
+		rows = slices.Clip(slices.Clone(rows[:w]))
+		vals = slices.Clip(slices.Clone(vals[:w]))
+	}
+	return &Matrix{n: n, colPtr: colPtr, rowIdx: rows[:w], val: vals[:w]}
 }
