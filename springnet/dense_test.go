@@ -169,51 +169,64 @@ func (r *randomNet) reference(t *testing.T) []float64 {
 		groupCol[g] = col
 		col += 6
 	}
-	T := mat.NewDense(6*n, col, nil)
+	// Rows of T as (column, coefficient) lists: T is very sparse.
+	type tc struct {
+		col  int
+		coef float64
+	}
+	T := make([][]tc, 6*n)
 	for i := 0; i < n; i++ {
 		if g := r.group[i]; g >= 0 {
 			rr := r.at[i].Sub(r.gref[g])
 			m0 := groupCol[g]
 			for c := 0; c < 6; c++ {
-				T.Set(6*i+c, m0+c, 1)
+				T[6*i+c] = append(T[6*i+c], tc{m0 + c, 1})
 			}
 			// θ × r: ux += θy·rz − θz·ry, uy += θz·rx − θx·rz, uz += θx·ry − θy·rx
-			T.Set(6*i+0, m0+4, rr.Z)
-			T.Set(6*i+0, m0+5, -rr.Y)
-			T.Set(6*i+1, m0+5, rr.X)
-			T.Set(6*i+1, m0+3, -rr.Z)
-			T.Set(6*i+2, m0+3, rr.Y)
-			T.Set(6*i+2, m0+4, -rr.X)
+			T[6*i+0] = append(T[6*i+0], tc{m0 + 4, rr.Z}, tc{m0 + 5, -rr.Y})
+			T[6*i+1] = append(T[6*i+1], tc{m0 + 5, rr.X}, tc{m0 + 3, -rr.Z})
+			T[6*i+2] = append(T[6*i+2], tc{m0 + 3, rr.Y}, tc{m0 + 4, -rr.X})
 			continue
 		}
 		for c := 0; c < 6; c++ {
 			if nodeCol[i][c] >= 0 {
-				T.Set(6*i+c, nodeCol[i][c], 1)
+				T[6*i+c] = append(T[6*i+c], tc{nodeCol[i][c], 1})
 			}
 		}
 	}
-	K := mat.NewDense(6*n, 6*n, nil)
-	for i := range r.kFull {
-		K.SetRow(i, r.kFull[i])
-	}
-	var kt, kr mat.Dense
-	kt.Mul(K, T)
-	kr.Mul(T.T(), &kt)
+	// K_red = Tᵀ·K·T and f_red = Tᵀ·f, entry by entry.
 	sym := mat.NewSymDense(col, nil)
-	for i := 0; i < col; i++ {
-		for j := i; j < col; j++ {
-			sym.SetSym(i, j, (kr.At(i, j)+kr.At(j, i))/2)
+	for i := range r.kFull {
+		for j, v := range r.kFull[i] {
+			if v == 0 {
+				continue
+			}
+			for _, a := range T[i] {
+				for _, b := range T[j] {
+					if a.col <= b.col {
+						sym.SetSym(a.col, b.col, sym.At(a.col, b.col)+a.coef*v*b.coef)
+					}
+				}
+			}
 		}
 	}
-	var fr mat.VecDense
-	fr.MulVec(T.T(), mat.NewVecDense(6*n, r.fFull))
+	fr := mat.NewVecDense(col, nil)
+	for i, v := range r.fFull {
+		for _, a := range T[i] {
+			fr.SetVec(a.col, fr.AtVec(a.col)+a.coef*v)
+		}
+	}
 	var ch mat.Cholesky
 	require.True(t, ch.Factorize(sym), "reference matrix not positive definite")
 	var ur mat.VecDense
-	require.NoError(t, ch.SolveVecTo(&ur, &fr))
-	var uf mat.VecDense
-	uf.MulVec(T, &ur)
-	return uf.RawVector().Data
+	require.NoError(t, ch.SolveVecTo(&ur, fr))
+	uf := make([]float64, 6*n)
+	for i := range uf {
+		for _, a := range T[i] {
+			uf[i] += a.coef * ur.AtVec(a.col)
+		}
+	}
+	return uf
 }
 
 func newRNG() *rand.Rand { return rand.New(rand.NewPCG(1, 1)) }

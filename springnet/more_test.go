@@ -187,3 +187,24 @@ func TestDifferentialDeflection(t *testing.T) {
 	assert.InDelta(t, want.X, got.UX, 1e-12)
 	assert.NotZero(t, got.UZ)
 }
+
+func TestOffsetMountOnPinnedNode(t *testing.T) {
+	// A mount away from a node that only bars meet cannot be loaded: the
+	// node has no rotations to carry the moment. Stiffness there is an
+	// error, not a silently wrong number.
+	var m springnet.Model
+	a := m.AddNode("a", springnet.Vec{})
+	b := m.AddNode("b", springnet.Vec{Z: 1})
+	m.Fix(a, springnet.AllDOF)
+	m.AddFoot(b, springnet.Foot{K: springnet.Stiffness6{X: 1e6, Y: 1e6}}) // lateral tie
+	m.AddBar(a, b, springnet.Bar{EA: 1e8})
+	mt := m.AddMount("off", springnet.Vec{X: 0.2, Z: 1}, b)
+	_, err := springnet.MountStiffness(&m, mt, nil)
+	require.Error(t, err)
+	assert.Contains(t, err.Error(), `mount "off"`)
+	// At the node itself it is fine: k = EA/L along the bar (Hooke).
+	st, err := springnet.MountStiffness(&m, b, nil)
+	require.NoError(t, err)
+	assert.InEpsilon(t, 1e8, st.Along(springnet.Vec{Z: 1}), closeTol)
+	assert.False(t, st.HasRotations())
+}

@@ -57,6 +57,11 @@ func (s *Solver) MountStiffness(m *Model, p Place, st *StaticSettings) (*PointSt
 	d := &nt.dm
 	o, at := d.placeOwner(m, p)
 	ps := &PointStiffness{name: m.PlaceName(p)}
+	if o < d.nNodes && d.ownerHas[o]&Rotations != Rotations && at.Sub(d.ownerRef[o]).Norm() > 0 {
+		return nil, fmt.Errorf("springnet: stiffness at %s: the point is away from node %q, which carries no rotations "+
+			"(only bars or axial springs meet there), so a force there would turn it freely; "+
+			"put the mount at the node or on a rigid group", ps.name, m.nodes[o].name)
+	}
 	ps.rot = d.ownerHas[o]&Rotations == Rotations
 	ncol := 3
 	if ps.rot {
