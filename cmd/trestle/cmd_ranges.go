@@ -1,0 +1,276 @@
+package main
+
+import (
+	"fmt"
+	"io"
+	"math"
+
+	"github.com/trestle-go/trestle/materials"
+)
+
+// governingRow is one governing number across columns (levels or models).
+type governingRow struct {
+	name string
+	q    *quantity // nil: a plain number
+	vals []*float64
+	// lowerIsWorse says which way is bad, for the spread column.
+	lowerIsWorse bool
+}
+
+func ptr(v float64) *float64 { return &v }
+
+// governingRows lists the governing numbers of several reports.
+func governingRows(gs []Governing, u unitSystem) []governingRow {
+	k, mo := u.stiffness(), u.motion()
+	rows := []governingRow{
+		{name: "softest mount stiffness [" + k.unit + "]", q: &k, lowerIsWorse: true},
+		{name: "first natural frequency [Hz]", lowerIsWorse: true},
+		{name: "highest utilisation [%]"},
+		{name: "whole-stand buckling factor", lowerIsWorse: true},
+		{name: "lowest member Euler margin", lowerIsWorse: true},
+		{name: "largest displacement [" + mo.unit + "]", q: &mo},
+		{name: "tipping margin", lowerIsWorse: true},
+	}
+	for _, g := range gs {
+		var soft *float64
+		if g.SoftestMount != "" {
+			soft = ptr(g.SoftestStiffnessNPerM)
+		}
+		rows[0].vals = append(rows[0].vals, soft)
+		rows[1].vals = append(rows[1].vals, g.FirstFrequencyHz)
+		rows[2].vals = append(rows[2].vals, ptr(100*g.MaxUtilisation))
+		rows[3].vals = append(rows[3].vals, g.BucklingFactor)
+		rows[4].vals = append(rows[4].vals, g.EulerMargin)
+		rows[5].vals = append(rows[5].vals, ptr(g.MaxDisplacementM))
+		rows[6].vals = append(rows[6].vals, g.TippingFactor)
+	}
+	return rows
+}
+
+func (r governingRow) cell(i int) string {
+	v := r.vals[i]
+	if v == nil {
+		return "—"
+	}
+	if r.q != nil {
+		return r.q.f(*v)
+	}
+	return num(*v)
+}
+
+func runRanges(e env) error {
+	fl := newFlags("ranges", "trestle ranges [flags] FILE",
+		`Analyses the stand in FILE three times, with every material and spring at
+the low, nominal and high end of its range (Young's modulus, shear
+modulus, spring and foot spreads), and shows the spread of the governing
+numbers: mount stiffness, first natural frequency, utilisation, buckling
+factor, displacement. Design to the worse end.`,
+		"trestle ranges stand.toml\ntrestle ranges --json demo", e)
+	var of outputFlags
+	of.add(fl)
+	pos, err := fl.parse(e.args)
+	if err != nil {
+		return handled(err)
+	}
+	if err := fl.wantArgs(pos, 1, 1); err != nil {
+		return err
+	}
+	u, err := parseUnits(of.units)
+	if err != nil {
+		return err
+	}
+	m, name, err := loadModel(pos[0], e.stdin)
+	if err != nil {
+		return err
+	}
+	rep := RangesReport{Schema: schemaRanges, Model: name, Cautions: cautions,
+		Pending: append([]string(nil), pendingAnalyses...)}
+	for _, l := range materials.Levels {
+		a, err := analyse(m, name, l)
+		if err != nil {
+			return fmt.Errorf("at %s material values: %w", l, err)
+		}
+		rep.Levels = append(rep.Levels, LevelReport{Level: l.String(), Governing: a.report.Governing, Mounts: a.report.Mounts})
+	}
+	if of.json {
+		return writeJSON(e.stdout, rep)
+	}
+	writeRanges(e.stdout, rep, u)
+	return nil
+}
+
+// spread returns (max − min)/nominal of the non-nil values, and whether
+// it could be computed.
+func spread(vals []*float64, nominal int) (float64, bool) {
+	lo, hi := math.Inf(1), math.Inf(-1)
+	for _, v := range vals {
+		if v == nil {
+			return 0, false
+		}
+		lo, hi = math.Min(lo, *v), math.Max(hi, *v)
+	}
+	n := vals[nominal]
+	if n == nil || *n == 0 {
+		return 0, false
+	}
+	return (hi - lo) / math.Abs(*n), true
+}
+
+func writeRanges(w io.Writer, r RangesReport, u unitSystem) {
+	fmt.Fprintf(w, "trestle ranges: %s\n", r.Model)
+	fmt.Fprintf(w, "Every material and spring at the low, nominal and high end of its range.\n")
+	gs := make([]Governing, len(r.Levels))
+	for i, l := range r.Levels {
+		gs[i] = l.Governing
+	}
+	heading(w, "GOVERNING NUMBERS")
+	tw := table(w)
+	fmt.Fprintf(tw, "  quantity")
+	for _, l := range r.Levels {
+		fmt.Fprintf(tw, "\t%s", l.Level)
+	}
+	fmt.Fprintf(tw, "\tspread\n")
+	nominal := 0
+	for i, l := range r.Levels {
+		if l.Level == materials.Nominal.String() {
+			nominal = i
+		}
+	}
+	for _, row := range governingRows(gs, u) {
+		fmt.Fprintf(tw, "  %s", row.name)
+		for i := range row.vals {
+			fmt.Fprintf(tw, "\t%s", row.cell(i))
+		}
+		sp := "—"
+		if s, ok := spread(row.vals, nominal); ok {
+			sp = pct(s)
+		}
+		fmt.Fprintf(tw, "\t%s\n", sp)
+	}
+	tw.Flush()
+	if len(r.Levels) > 0 && len(r.Levels[0].Mounts) > 0 {
+		k := u.stiffness()
+		heading(w, fmt.Sprintf("MOUNT STIFFNESS, softest direction [%s]", k.unit))
+		tw = table(w)
+		fmt.Fprintf(tw, "  mount")
+		for _, l := range r.Levels {
+			fmt.Fprintf(tw, "\t%s", l.Level)
+		}
+		fmt.Fprintf(tw, "\talong (nominal)\n")
+		for i, mt := range r.Levels[0].Mounts {
+			fmt.Fprintf(tw, "  %s", mt.Name)
+			for _, l := range r.Levels {
+				fmt.Fprintf(tw, "\t%s", k.f(l.Mounts[i].PrincipalNPerM[0]))
+			}
+			fmt.Fprintf(tw, "\t%s\n", direction(r.Levels[nominal].Mounts[i].PrincipalDirection[0]))
+		}
+		tw.Flush()
+	}
+	if len(r.Pending) > 0 {
+		heading(w, "NOT IN THIS REPORT")
+		for _, p := range r.Pending {
+			fmt.Fprintf(w, "  – %s\n", p)
+		}
+	}
+	writeCautions(w)
+}
+
+func runCompare(e env) error {
+	fl := newFlags("compare", "trestle compare [flags] A B",
+		`Analyses two model files and shows their governing numbers side by side
+with the change from A to B: mount stiffness, first natural frequency,
+utilisation, buckling, displacement, tipping margin. "demo" names the
+built-in demo; one of them may be "-" (standard input).`,
+		"trestle compare stand.toml stand-braced.toml\ntrestle compare --units us demo mine.toml", e)
+	var of outputFlags
+	of.add(fl)
+	level := fl.String("level", "nominal", "material values: `low`, nominal or high")
+	pos, err := fl.parse(e.args)
+	if err != nil {
+		return handled(err)
+	}
+	if err := fl.wantArgs(pos, 2, 2); err != nil {
+		return err
+	}
+	if pos[0] == "-" && pos[1] == "-" {
+		return fmt.Errorf("compare: only one of A and B can be standard input")
+	}
+	u, err := parseUnits(of.units)
+	if err != nil {
+		return err
+	}
+	l, err := parseLevel(*level)
+	if err != nil {
+		return err
+	}
+	var reps [2]*AnalysisReport
+	for i, p := range pos {
+		m, name, err := loadModel(p, e.stdin)
+		if err != nil {
+			return err
+		}
+		a, err := analyse(m, name, l)
+		if err != nil {
+			return err
+		}
+		reps[i] = a.report
+	}
+	rep := CompareReport{Schema: schemaCompare, A: reps[0].Model, B: reps[1].Model,
+		GoverningA: reps[0].Governing, GoverningB: reps[1].Governing,
+		MountsA: reps[0].Mounts, MountsB: reps[1].Mounts, Cautions: cautions}
+	if of.json {
+		return writeJSON(e.stdout, rep)
+	}
+	writeCompare(e.stdout, rep, u)
+	return nil
+}
+
+func writeCompare(w io.Writer, r CompareReport, u unitSystem) {
+	fmt.Fprintf(w, "trestle compare\n  A: %s\n  B: %s\n", r.A, r.B)
+	heading(w, "GOVERNING NUMBERS")
+	tw := table(w)
+	fmt.Fprintf(tw, "  quantity\tA\tB\tB vs A\n")
+	for _, row := range governingRows([]Governing{r.GoverningA, r.GoverningB}, u) {
+		ch := "—"
+		if a, b := row.vals[0], row.vals[1]; a != nil && b != nil && *a != 0 {
+			ch = fmt.Sprintf("%+.1f %%", 100*(*b-*a)/math.Abs(*a))
+		}
+		fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\n", row.name, row.cell(0), row.cell(1), ch)
+	}
+	tw.Flush()
+	k := u.stiffness()
+	heading(w, fmt.Sprintf("MOUNT STIFFNESS, softest direction [%s]", k.unit))
+	tw = table(w)
+	fmt.Fprintf(tw, "  mount\tA\tB\tB vs A\n")
+	seen := map[string]bool{}
+	find := func(ms []MountStiffness, name string) *MountStiffness {
+		for i := range ms {
+			if ms[i].Name == name {
+				return &ms[i]
+			}
+		}
+		return nil
+	}
+	for _, list := range [][]MountStiffness{r.MountsA, r.MountsB} {
+		for _, mt := range list {
+			if seen[mt.Name] {
+				continue
+			}
+			seen[mt.Name] = true
+			a, b := find(r.MountsA, mt.Name), find(r.MountsB, mt.Name)
+			ca, cb, ch := "—", "—", "—"
+			if a != nil {
+				ca = k.f(a.PrincipalNPerM[0])
+			}
+			if b != nil {
+				cb = k.f(b.PrincipalNPerM[0])
+			}
+			if a != nil && b != nil && a.PrincipalNPerM[0] != 0 {
+				ch = fmt.Sprintf("%+.1f %%", 100*(b.PrincipalNPerM[0]-a.PrincipalNPerM[0])/a.PrincipalNPerM[0])
+			}
+			fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\n", mt.Name, ca, cb, ch)
+		}
+	}
+	tw.Flush()
+	writeCautions(w)
+}
