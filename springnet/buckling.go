@@ -124,10 +124,10 @@ func Buckling(m *Model, c CaseID, s *BucklingSettings) (*BucklingResult, error) 
 	}
 
 	k := nt.assemble(sparse.NewBuilder(0))
-	kg, any := nt.assembleGeometric(sparse.NewBuilder(0), cr.forces)
+	kg, nonzero := nt.assembleGeometric(sparse.NewBuilder(0), cr.forces)
 	res := &BucklingResult{nt: nt, c: c, static: cr}
 	n := k.N()
-	if !any || n == 0 {
+	if !nonzero || n == 0 {
 		return nil, &FewerFactorsError{Case: name, Want: modes}
 	}
 	want := min(modes, n)
@@ -156,7 +156,11 @@ func Buckling(m *Model, c CaseID, s *BucklingSettings) (*BucklingResult, error) 
 		res.vecs = append(res.vecs, nt.normaliseMode(v))
 	}
 	if len(res.factors) < modes {
-		return res, errors.Join(&FewerFactorsError{Case: name, Want: modes, Found: len(res.factors)}, cond)
+		fe := &FewerFactorsError{Case: name, Want: modes, Found: len(res.factors)}
+		if cond != nil {
+			return res, errors.Join(fe, cond)
+		}
+		return res, fe
 	}
 	if cond != nil {
 		return res, cond
@@ -343,7 +347,7 @@ func (nt *net) assembleGeometric(b *sparse.Builder, forces []ElementForce) (*spa
 	var dofs [12]edof
 	var tbuf [12][3]term
 	var ts [12][]term
-	any := false
+	nonzero := false
 	for i := range nt.m.elems {
 		kind := nt.m.elems[i].kind
 		if kind != BarKind && kind != BeamKind {
@@ -367,14 +371,14 @@ func (nt *net) assembleGeometric(b *sparse.Builder, forces []ElementForce) (*spa
 					for _, tb := range ts[bb] {
 						if ta.eq >= tb.eq {
 							b.Add(ta.eq, tb.eq, v*ta.coef*tb.coef)
-							any = true
+							nonzero = true
 						}
 					}
 				}
 			}
 		}
 	}
-	return b.Matrix(), any
+	return b.Matrix(), nonzero
 }
 
 // negated returns −a.

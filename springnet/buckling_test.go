@@ -367,3 +367,39 @@ func TestBucklingSwayUnderHeavyMachine(t *testing.T) {
 	require.Len(t, pts, 5)
 	assert.InDelta(t, 1, pts[4].X, 1e-9, "the column's top follows the sway")
 }
+
+func TestBucklingOnCompressionOnlyFeet(t *testing.T) {
+	// A post on a base plate (rigid group) standing on four loose
+	// (compression-only) feet. The feet let the base rock, so the post
+	// buckles below the fixed-base cantilever load π²EI/(2L)² (Timoshenko
+	// & Gere) and above the load of the same post on a base that rocks
+	// with the feet's rotational stiffness alone: for a cantilever on a
+	// root spring k_r, the critical load exceeds 1/(1/P_fixed + L/k_r)
+	// (Föppl–Papkovich bound for springs in series; from memory).
+	const l, ei, kz, s = 1.5, 5e4, 2e7, 0.2
+	var m springnet.Model
+	var feet []springnet.NodeID
+	for _, c := range [][2]float64{{-s, -s}, {s, -s}, {s, s}, {-s, s}} {
+		n := m.AddNode("", springnet.Vec{X: c[0], Y: c[1]})
+		m.AddFoot(n, springnet.Foot{K: springnet.Stiffness6{X: 1e7, Y: 1e7, Z: kz}, CompressionOnly: true})
+		feet = append(feet, n)
+	}
+	base := m.AddNode("base", springnet.Vec{})
+	m.AddRigidGroup("plate", append(feet, base)...)
+	prev := base
+	for i := 1; i <= 8; i++ {
+		n := m.AddNode("", springnet.Vec{Z: l * float64(i) / 8})
+		m.AddBeam(prev, n, springnet.Beam{Raw: springnet.RawBeam{EA: 1e9, EIy: ei, EIz: ei, GJ: ei}})
+		prev = n
+	}
+	m.AddLoad(prev, springnet.Load{FZ: -1e3})
+	res, err := springnet.Buckling(&m, springnet.DefaultCase, nil)
+	require.NoError(t, err)
+	assert.Empty(t, res.Static().Lifted(), "all feet in contact")
+	pFixed := math.Pi * math.Pi * ei / (4 * l * l)
+	kr := 2 * kz * (2 * s * s) // rocking stiffness of the plate: Σ kz·x²
+	lower := 1 / (1/pFixed + l/kr)
+	got := res.Factor(0) * 1e3
+	assert.Less(t, got, pFixed)
+	assert.Greater(t, got, lower)
+}

@@ -148,6 +148,12 @@ func (c *CaseResult) MemberForces(e ElementID) (MemberResult, error) {
 	return c.MemberCheck(e, nil)
 }
 
+// MemberForces returns the results of bar or beam e in DefaultCase (the
+// first case) with the default member settings; use Case for the others.
+func (r *StaticResult) MemberForces(e ElementID) (MemberResult, error) {
+	return r.cases[0].MemberForces(e)
+}
+
 // MemberCheck returns the results of bar or beam e in this case: end
 // forces, fibre stresses, utilisation and the Euler buckling check with
 // the effective-length factors chosen by s (nil: defaults). It returns an

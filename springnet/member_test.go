@@ -276,3 +276,63 @@ func TestMemberEulerCheck(t *testing.T) {
 		assert.ErrorContains(t, err, "effective-length factor")
 	})
 }
+
+func TestMemberUnsymmetricBendingAngle(t *testing.T) {
+	// A sharp-cornered 50 × 50 × 5 mm equal angle as a cantilever (the end
+	// forces of a statically determinate member follow from equilibrium
+	// alone). Its geometric axes are not principal. Hand calculation by
+	// principal axes (Gere & Goodno, Mechanics of Materials, unsymmetric
+	// bending): composite-rectangle properties, rotation by θ with
+	// tan 2θ = −2·Iyz/(Iy − Iz), moments resolved on the principal axes,
+	// σ = N/A + My'·z'/Iy' − Mz'·y'/Iz' at the six corners.
+	const b, tk, l = 0.05, 0.005, 0.6
+	const fx, fy, fz = -2e3, 150.0, -300.0
+	type rect struct{ y0, y1, z0, z1 float64 }
+	rs := []rect{{0, b, 0, tk}, {0, tk, tk, b}}
+	var area, sy, sz float64
+	for _, r := range rs {
+		a := (r.y1 - r.y0) * (r.z1 - r.z0)
+		area += a
+		sy += a * (r.y0 + r.y1) / 2
+		sz += a * (r.z0 + r.z1) / 2
+	}
+	yc, zc := sy/area, sz/area
+	var iy, iz, iyz float64
+	for _, r := range rs {
+		w, h := r.y1-r.y0, r.z1-r.z0
+		a := w * h
+		dy, dz := (r.y0+r.y1)/2-yc, (r.z0+r.z1)/2-zc
+		iy += w*h*h*h/12 + a*dz*dz
+		iz += h*w*w*w/12 + a*dy*dy
+		iyz += a * dy * dz
+	}
+	th := 0.5 * math.Atan2(-2*iyz, iy-iz)
+	c, s := math.Cos(th), math.Sin(th)
+	iyP := iy*c*c + iz*s*s - 2*iyz*s*c
+	izP := iz*c*c + iy*s*s + 2*iyz*s*c
+
+	m, tip, e := beamCantilever(springnet.Vec{X: 1}, l, springnet.Beam{Material: beamSteel(), Section: sections.Angle{B: b, H: b, T: tk}})
+	m.AddLoad(tip, springnet.Load{FX: fx, FY: fy, FZ: fz})
+	res, err := springnet.Static(m, nil)
+	require.NoError(t, err)
+	mr, err := res.Case(springnet.DefaultCase).MemberForces(e)
+	require.NoError(t, err)
+	require.True(t, mr.Stressed)
+	// Root section forces from statics of the cantilever (local = global
+	// axes for a member along X with the default up): My = −fz·L,
+	// Mz = fy·L on the face at end a.
+	myR, mzR := -fz*l, fy*l
+	assert.InEpsilon(t, myR, mr.A.My, memberTol)
+	assert.InEpsilon(t, mzR, mr.A.Mz, memberTol)
+	myP := myR*c + mzR*s
+	mzP := -myR*s + mzR*c
+	hi, lo := math.Inf(-1), math.Inf(1)
+	for _, q := range [][2]float64{{0, 0}, {b, 0}, {b, tk}, {tk, tk}, {tk, b}, {0, b}} {
+		y, z := q[0]-yc, q[1]-zc
+		yP, zP := y*c+z*s, -y*s+z*c
+		sg := fx/area + myP*zP/iyP - mzP*yP/izP
+		hi, lo = math.Max(hi, sg), math.Min(lo, sg)
+	}
+	assert.InEpsilon(t, math.Max(hi, 0), mr.Tension, 1e-9)
+	assert.InEpsilon(t, math.Max(-lo, 0), mr.Compression, 1e-9)
+}
