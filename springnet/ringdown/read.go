@@ -102,6 +102,15 @@ func Read(r io.Reader, opt ReadOptions) (Record, error) {
 	if first == len(lines) {
 		return Record{}, fmt.Errorf("ringdown: %s: no data lines, only %d line(s) of text", name, len(lines))
 	}
+	// A separator at the end of every line leaves an empty last field: drop
+	// it when the first data line has one.
+	if f := lines[first].fields; len(f) > 1 && f[len(f)-1] == "" {
+		for i := range lines {
+			if f := lines[i].fields; len(f) > 1 && f[len(f)-1] == "" {
+				lines[i].fields = f[:len(f)-1]
+			}
+		}
+	}
 	data := lines[first:]
 	ncol := len(data[0].fields)
 	cols, header := headerColumns(lines[:first], ncol)
@@ -163,8 +172,8 @@ func detectSeparator(lines []line) rune {
 }
 
 // splitFields splits s at sep (white space when sep is 0), trims each field
-// and its quotes, turns a decimal comma into a point when sep is not a
-// comma, and drops one empty field left by a trailing separator.
+// and its quotes, and turns a decimal comma into a point when sep is not a
+// comma.
 func splitFields(s string, sep rune) []string {
 	var f []string
 	if sep == 0 {
@@ -181,9 +190,6 @@ func splitFields(s string, sep rune) []string {
 			v = strings.Replace(v, ",", ".", 1)
 		}
 		f[i] = v
-	}
-	if len(f) > 1 && f[len(f)-1] == "" {
-		f = f[:len(f)-1]
 	}
 	return f
 }

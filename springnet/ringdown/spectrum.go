@@ -135,7 +135,7 @@ func (s spectrum) noiseRatio(k int, pk, hw, lo, hi float64) float64 {
 }
 
 // zoomSpectrum returns the amplitude spectrum of the analytic signal
-// z = y + i·h near fc, with bin spacing at most df: z is shifted down by fc,
+// z = y + i·h near fc, with bin spacing df or at most 64-fold zero-padding: z is shifted down by fc,
 // averaged over blocks of d samples (a boxcar low-pass) and decimated by d,
 // then zero-padded and transformed with a complex FFT. The spectrum of the
 // analytic signal is twice the positive-frequency spectrum of y, so peak,
@@ -156,7 +156,9 @@ func zoomSpectrum(y, h []float64, rate, fc float64, d int, df float64) spectrum 
 		w[k] = acc / complex(float64(d), 0)
 	}
 	rd := rate / float64(d)
-	n := fastLen(max(2*m, int(math.Ceil(rd/df))))
+	// Zero-padding beyond 64 times the data (or 2¹⁶ bins) adds nothing the
+	// interpolation cannot give; it only costs time when df is tiny.
+	n := fastLen(max(2*m, int(math.Min(math.Ceil(rd/df), float64(max(64*m, 1<<16))))))
 	buf := make([]complex128, n)
 	copy(buf, w)
 	c := fourier.NewCmplxFFT(n).Coefficients(nil, buf)
