@@ -45,7 +45,8 @@ type MemberResult struct {
 	// LineLoad is the distributed load along the member from self-weight
 	// in this case, in local axes [N/m]: X along the member, Y and Z
 	// across it. Beams carry it in bending (At includes it); bars carry
-	// only their axial share, their self-weight bending is not computed.
+	// only their axial share (A.N and B.N differ by q_x·L about the bar's
+	// mean force), their self-weight bending is not computed.
 	LineLoad Vec
 
 	// Stressed tells whether fibre stresses were computed: false for a
@@ -206,7 +207,13 @@ func (c *CaseResult) member(e ElementID, s *MemberSettings, touch []int) MemberR
 	if g := caseGravity(m, c.id); g != (Vec{}) && p.mp.lineMass > 0 {
 		q := vecOf(p.frame.ToLocal(g.Scale(p.mp.lineMass).arr()))
 		if x.kind == BarKind {
+			// A bar's force from its end displacements is its mean
+			// (the weight is lumped half at each end); spread it along
+			// the bar so that N(x) = N_A − q_x·x has that mean.
 			q.Y, q.Z = 0, 0
+			half := q.X * p.frame.L / 2
+			r.A.N, r.B.N = ef.Axial+half, ef.Axial-half
+			r.Local[0], r.Local[6] = -r.A.N, r.B.N
 		}
 		r.LineLoad = q
 	}

@@ -336,3 +336,26 @@ func TestMemberUnsymmetricBendingAngle(t *testing.T) {
 	assert.InEpsilon(t, math.Max(hi, 0), mr.Tension, 1e-9)
 	assert.InEpsilon(t, math.Max(-lo, 0), mr.Compression, 1e-9)
 }
+
+func TestMemberHangingBarSelfWeight(t *testing.T) {
+	// A bar hanging from its top end under its own weight W = ρ·A·L·g:
+	// N = W at the top, 0 at the free bottom (Gere & Goodno, Mechanics of
+	// Materials, bar hanging under its own weight).
+	const l, d = 3.0, 0.02
+	var m springnet.Model
+	top := m.AddNode("top", springnet.Vec{Z: l})
+	bot := m.AddNode("bottom", springnet.Vec{})
+	m.Fix(top, springnet.Translations)
+	m.Fix(bot, springnet.UX|springnet.UY)
+	e := m.AddBar(top, bot, springnet.Bar{Material: beamSteel(), Section: sections.Round{D: d}})
+	m.SetGravity(springnet.DefaultCase, springnet.Gravity(1))
+	res, err := springnet.Static(&m, nil)
+	require.NoError(t, err)
+	mr, err := res.MemberForces(e)
+	require.NoError(t, err)
+	w := 7850 * math.Pi * d * d / 4 * l * springnet.StandardGravity
+	assert.InEpsilon(t, w, mr.A.N, memberTol)
+	assert.InDelta(t, 0, mr.B.N, w*memberTol)
+	assert.InDelta(t, 0, mr.At(1).N, w*memberTol)
+	assert.InEpsilon(t, w/(math.Pi*d*d/4), mr.Tension, memberTol)
+}
