@@ -62,6 +62,15 @@ func TestPrattTruss(t *testing.T) {
 	assert.InDelta(t, 15e3, cr.Reaction(L[0]).FZ, closeTol*p)
 	assert.InDelta(t, 15e3, cr.Reaction(L[4]).FZ, closeTol*p)
 	assert.InDelta(t, 0, cr.Reaction(L[0]).FX, closeTol*p)
+	// Every node is held out of plane, so all eight report; vertical
+	// reactions sum to the 30 kN applied (statics).
+	sum := 0.0
+	rs := cr.Reactions()
+	assert.Len(t, rs, 8)
+	for _, r := range rs {
+		sum += r.Load.FZ
+	}
+	assert.InEpsilon(t, 3*p, sum, closeTol)
 }
 
 func TestCantileverBeam(t *testing.T) {
