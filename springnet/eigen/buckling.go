@@ -3,7 +3,6 @@ package eigen
 import (
 	"errors"
 	"fmt"
-	"math"
 
 	"github.com/trestle-go/trestle/springnet/sparse"
 )
@@ -85,5 +84,3 @@ func (op *bucklingOp) apply(dst, x, _ []float64) error {
 }
 
 func (op *bucklingOp) bmul(dst, x []float64) { op.k.MulVec(dst, x) }
-
-var _ = math.Abs

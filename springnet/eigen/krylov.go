@@ -316,15 +316,6 @@ func (kr *krylov) rayleighRitz(m int, exact bool, prio func(float64) float64, to
 	return rz, nil
 }
 
-// finite reports whether Ritz value j is a finite eigenvalue (θ not ≈ 0).
-func (rz *ritz) finite(j int) bool {
-	var tmax float64
-	for _, t := range rz.theta {
-		tmax = max(tmax, math.Abs(t))
-	}
-	return math.Abs(rz.theta[j]) > 1e-12*tmax
-}
-
 // iterate runs restart cycles until the want most wanted Ritz pairs are
 // converged (or the basis is exhausted). It returns the last Rayleigh–Ritz
 // solution.
