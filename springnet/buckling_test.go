@@ -403,3 +403,29 @@ func TestBucklingOnCompressionOnlyFeet(t *testing.T) {
 	assert.Less(t, got, pFixed)
 	assert.Greater(t, got, lower)
 }
+
+func TestBucklingStubbyTimoshenkoColumn(t *testing.T) {
+	// A squat fixed–free post, L/h = 2, as Timoshenko beams: shear lowers
+	// the Euler load by Engesser's formula P = P_e / (1 + P_e/(κGA))
+	// (Timoshenko & Gere, Theory of Elastic Stability, effect of shearing
+	// force on the critical load), K = 2.
+	const l, b, h = 0.24, 0.08, 0.12
+	const e = 200e9
+	iWeak := h * b * b * b / 12
+	pe := math.Pi * math.Pi * e * iWeak / (4 * l * l)
+	kga := 5.0 / 6 * b * h * e / 2.6 // κ = 5/6 for a rectangle, G = E/2(1+ν)
+	require.Greater(t, pe/kga, 5*eulerTol, "shear must lower the load by more than the tolerance")
+	var m springnet.Model
+	prev := m.AddNode("base", springnet.Vec{})
+	m.Fix(prev, springnet.AllDOF)
+	for i := 1; i <= 8; i++ {
+		n := m.AddNode("", springnet.Vec{Z: l * float64(i) / 8})
+		m.AddBeam(prev, n, springnet.Beam{Material: beamSteel(), Section: sections.Rect{B: b, H: h}, Timoshenko: true})
+		prev = n
+	}
+	m.AddLoad(prev, springnet.Load{FZ: -1e6})
+	res, err := springnet.Buckling(&m, springnet.DefaultCase, &springnet.BucklingSettings{Modes: 1})
+	require.NoError(t, err)
+	want := pe / (1 + pe/kga) / 1e6
+	assert.InEpsilon(t, want, res.Factor(0), eulerTol)
+}

@@ -51,15 +51,27 @@ func TestPortalFrameRigidGirder(t *testing.T) {
 	const eaDiag = 4e7
 	ld := math.Hypot(w, h)
 	cos := w / ld
+	// A joint spring k_r between column top and girder (a bolted joint):
+	// slope-deflection with M_top = −k_r·θ gives, per fixed-base column,
+	//
+	//	k = 12EI/h³ − 36·(EI)²/(h⁴·(4EI/h + k_r))
+	//
+	// (derived here; k_r → ∞: 12EI/h³, k_r = 0: 3EI/h³, the cantilever).
+	const kr = 2 * ei / h
 	tests := []struct {
 		name   string
 		base   springnet.DOF
 		brace  bool
+		top    springnet.Beam // joint at the column tops
 		wantFn func() float64
 	}{
-		{"fixed bases", springnet.AllDOF, false, func() float64 { return 2 * 12 * ei / (h * h * h) }},
-		{"pinned bases", springnet.Translations | springnet.RZ, false, func() float64 { return 2 * 3 * ei / (h * h * h) }},
-		{"fixed bases, braced bay", springnet.AllDOF, true, func() float64 { return 2*12*ei/(h*h*h) + eaDiag/ld*cos*cos }},
+		{"fixed bases", springnet.AllDOF, false, springnet.Beam{}, func() float64 { return 2 * 12 * ei / (h * h * h) }},
+		{"pinned bases", springnet.Translations | springnet.RZ, false, springnet.Beam{}, func() float64 { return 2 * 3 * ei / (h * h * h) }},
+		{"fixed bases, braced bay", springnet.AllDOF, true, springnet.Beam{}, func() float64 { return 2*12*ei/(h*h*h) + eaDiag/ld*cos*cos }},
+		{"fixed bases, pinned tops (releases)", springnet.AllDOF, false, springnet.Beam{ReleaseB: springnet.ReleasePin},
+			func() float64 { return 2 * 3 * ei / (h * h * h) }},
+		{"fixed bases, bolted tops (joint springs)", springnet.AllDOF, false, springnet.Beam{SpringB: springnet.Vec{Y: kr, Z: kr}},
+			func() float64 { return 2 * (12*ei/(h*h*h) - 36*ei*ei/(h*h*h*h*(4*ei/h+kr))) }},
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
@@ -70,8 +82,10 @@ func TestPortalFrameRigidGirder(t *testing.T) {
 			t2 := m.AddNode("top 2", springnet.Vec{X: w, Z: h})
 			m.Fix(b1, tc.base)
 			m.Fix(b2, tc.base)
-			m.AddBeam(b1, t1, springnet.Beam{Name: "column 1", Raw: frameRaw(ei, h)})
-			m.AddBeam(b2, t2, springnet.Beam{Name: "column 2", Raw: frameRaw(ei, h)})
+			col := tc.top
+			col.Raw = frameRaw(ei, h)
+			m.AddBeam(b1, t1, col)
+			m.AddBeam(b2, t2, col)
 			g := m.AddRigidGroup("girder", t1, t2)
 			m.FixGroup(g, springnet.Rotations|springnet.UZ)
 			if tc.brace {
