@@ -61,3 +61,40 @@ func Example() {
 	// Z: 441.8 N/µm
 	// softest: 1.111 N/µm, mostly along Y
 }
+
+// A machine of 400 kg on a narrow stand with loose feet, pushed sideways
+// at the top: the load share between the feet and the tipping margin.
+func ExampleStatic() {
+	var m springnet.Model
+	var corners []springnet.NodeID
+	for _, c := range [4][2]float64{{0, 0}, {0.5, 0}, {0.5, 0.8}, {0, 0.8}} {
+		n := m.AddNode("", springnet.Vec{X: c[0], Y: c[1]})
+		m.AddFoot(n, springnet.Foot{K: springnet.Stiffness6{X: 1e7, Y: 1e7, Z: 2e8}, CompressionOnly: true})
+		corners = append(corners, n)
+	}
+	// The stand is stiff compared with its feet: one rigid body.
+	stand := m.AddRigidGroup("stand", corners...)
+	m.AddMass(stand, springnet.Mass{Kg: 400, Offset: springnet.Vec{Z: 0.9}})
+	top := m.AddMount("top", springnet.Vec{X: 0.25, Y: 0.4, Z: 1.6}, stand)
+	push := m.AddLoadCase("push")
+	m.SetGravity(push, springnet.Gravity(1))
+	m.AddCaseLoad(push, top, springnet.Load{FX: 300})
+
+	res, err := springnet.Static(&m, nil)
+	if err != nil {
+		log.Fatal(err)
+	}
+	cr := res.Case(push)
+	for _, f := range cr.Feet() {
+		fmt.Printf("%s: %.4g N (%.3g)\n", f.Name, f.Reaction.FZ, f.Share)
+	}
+	tip := cr.Tipping()
+	// By hand: W·b/2 = 3923 N × 0.25 m against 300 N × 1.6 m: 2.043.
+	fmt.Printf("tips at %.4g × the push\n", tip.Factor)
+	// Output:
+	// F0: 500.7 N (0.128)
+	// F1: 1461 N (0.372)
+	// F2: 1461 N (0.372)
+	// F3: 500.7 N (0.128)
+	// tips at 2.043 × the push
+}

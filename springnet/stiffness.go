@@ -24,6 +24,7 @@ type PointStiffness struct {
 	k3   [3][3]float64
 	k6   [6][6]float64
 	rot  bool
+	res  float64
 }
 
 // MountStiffness returns the stiffness at p with a new Solver; see
@@ -107,6 +108,7 @@ func (s *Solver) MountStiffness(m *Model, p Place, st *StaticSettings) (*PointSt
 			ps.rot = false
 		}
 	}
+	ps.res = worst
 	if worst > MaxResidual {
 		return ps, &ConditionError{Case: "stiffness at " + ps.name, Residual: worst}
 	}
@@ -143,6 +145,9 @@ func invertSym(a [][6]float64, n int) ([6][6]float64, bool) {
 	}
 	return out, true
 }
+
+// Residual returns the largest relative residual of the unit-load solves.
+func (p *PointStiffness) Residual() float64 { return p.res }
 
 // Name describes the place, e.g. `mount "spindle"`.
 func (p *PointStiffness) Name() string { return p.name }
