@@ -6,6 +6,9 @@ import (
 	"slices"
 )
 
+// Span is a stretch of time [Start, End] in seconds of record time.
+type Span struct{ Start, End float64 }
+
 // Settings tune Reduce. The zero value (or a nil *Settings) reduces the
 // dominant mode of the whole record with an automatic fit window.
 type Settings struct {
@@ -25,7 +28,7 @@ type Settings struct {
 	// Window fixes the fit window [s, record time]. Zero: automatic, from
 	// after the strike and any clipped peaks to where the envelope meets
 	// NoiseFactor × the noise floor.
-	Window Band
+	Window Span
 	// NoiseFactor: the automatic fit window ends where the smoothed
 	// envelope falls below NoiseFactor × the noise floor. Zero: 3.
 	NoiseFactor float64
@@ -78,7 +81,7 @@ func (s *Settings) config(rate float64, dur float64) (config, error) {
 		c.Settings = *s
 	}
 	for _, v := range []float64{c.Band.Low, c.Band.High, c.Centre, c.Width, c.Search.Low, c.Search.High,
-		c.Window.Low, c.Window.High, c.NoiseFactor, c.Disagree} {
+		c.Window.Start, c.Window.End, c.NoiseFactor, c.Disagree} {
 		if bad(v) {
 			return c, fmt.Errorf("ringdown: settings hold a value that is not finite (%g)", v)
 		}
@@ -115,8 +118,8 @@ func (s *Settings) config(rate float64, dur float64) (config, error) {
 	if !c.Search.IsZero() && !(c.Search.Low >= 0 && c.Search.Low < c.Search.High) {
 		return c, fmt.Errorf("ringdown: search band %g–%g Hz is not an interval", c.Search.Low, c.Search.High)
 	}
-	if !c.Window.IsZero() && !(c.Window.Low < c.Window.High) {
-		return c, fmt.Errorf("ringdown: fit window %g–%g s is not an interval", c.Window.Low, c.Window.High)
+	if c.Window != (Span{}) && !(c.Window.Start < c.Window.End) {
+		return c, fmt.Errorf("ringdown: fit window %g–%g s is not an interval", c.Window.Start, c.Window.End)
 	}
 	return c, nil
 }
@@ -353,13 +356,13 @@ func (r *reduction) chooseWindow() error {
 	r.floor = median(es[t0:])
 	edge := int(math.Ceil(2 * p))
 	settle := int(math.Ceil(r.cfg.band.settle() * r.fs))
-	if !r.cfg.Window.IsZero() {
-		s := int(math.Ceil((r.cfg.Window.Low - r.rec.Start) * r.fs))
-		e := int(math.Floor((r.cfg.Window.High - r.rec.Start) * r.fs))
+	if r.cfg.Window != (Span{}) {
+		s := int(math.Ceil((r.cfg.Window.Start - r.rec.Start) * r.fs))
+		e := int(math.Floor((r.cfg.Window.End - r.rec.Start) * r.fs))
 		s, e = max(s, 0), min(e, n-1)
 		if e-s < int(2*p) {
 			return fmt.Errorf("ringdown: fit window %.4g–%.4g s holds fewer than two cycles of the %.4g Hz mode inside the record (%.4g–%.4g s)",
-				r.cfg.Window.Low, r.cfg.Window.High, r.f0, r.rec.Start, r.rec.Time(n-1))
+				r.cfg.Window.Start, r.cfg.Window.End, r.f0, r.rec.Start, r.rec.Time(n-1))
 		}
 		r.win = [2]int{s, e}
 		return nil

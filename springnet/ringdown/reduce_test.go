@@ -310,8 +310,8 @@ func TestReduceErrors(t *testing.T) {
 		{"noise factor below one", ok, &Settings{NoiseFactor: 0.5}, "ringdown: noise factor 0.5 is below 1"},
 		{"disagreement factor not above one", ok, &Settings{Disagree: 1}, "ringdown: disagreement factor 1 is not above 1"},
 		{"search band reversed", ok, &Settings{Search: Band{50, 10}}, "ringdown: search band 50–10 Hz is not an interval"},
-		{"window reversed", ok, &Settings{Window: Band{1, 0.5}}, "ringdown: fit window 1–0.5 s is not an interval"},
-		{"window too short", ok, &Settings{Window: Band{0.5, 0.52}}, "ringdown: fit window 0.5–0.52 s holds fewer than two cycles of the 25 Hz mode inside the record (0–1.999 s)"},
+		{"window reversed", ok, &Settings{Window: Span{1, 0.5}}, "ringdown: fit window 1–0.5 s is not an interval"},
+		{"window too short", ok, &Settings{Window: Span{0.5, 0.52}}, "ringdown: fit window 0.5–0.52 s holds fewer than two cycles of the 25 Hz mode inside the record (0–1.999 s)"},
 		// The search starts at three cycles per record length after the
 		// strike: 3 / (1.890 s) = 1.587 Hz.
 		{"no peak in the search band", ok, &Settings{Search: Band{0, 0.5}}, "ringdown: no spectral peak between 1.587 and 0.5 Hz"},

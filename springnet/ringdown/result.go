@@ -121,6 +121,19 @@ func (r Result) Damping() materials.Damping {
 	return d
 }
 
+// Limits for the warnings on the fit.
+const (
+	// noRingdown: a best-fit damped sinusoid whose residual standard
+	// deviation exceeds its own starting amplitude describes no ring-down.
+	noRingdown = 1.0
+	// poorFit: residuals above 30 % of the amplitude mean a 10 dB SNR or
+	// worse at the window start, or something the model lacks.
+	poorFit = 0.3
+	// littleDecay: over the window the envelope should fall by at least
+	// e^(−0.5) ≈ 61 %; less, and the decay rate rests on little change.
+	littleDecay = 0.5
+)
+
 // Coverage is the coverage factor of LossFactor's range: ±2 standard
 // uncertainties, about 95 % for a normal distribution (JCGM 100:2008, GUM,
 // §6.3).
@@ -229,13 +242,27 @@ func (r *reduction) combine(ms []MethodEstimate, sf sineFit, hf hilbertFit) (Res
 		r.addWarn("methods disagree by %.0f %% on the damping ratio (%.3g to %.3g; limit %.0f %%)",
 			100*(res.agree.Factor-1), lo, hi, 100*(res.agree.Limit-1))
 	}
+	if nom.Method == MethodSineFit {
+		switch rel := sf.resid / sf.amplitude(); {
+		case rel > noRingdown:
+			return Result{}, fmt.Errorf("ringdown: no ring-down found near %.4g Hz: the best damped sinusoid leaves residuals %.2g times its amplitude", r.f0, rel)
+		case rel > poorFit:
+			r.addWarn("the damped sinusoid fits poorly: residuals are %.0f %% of its amplitude (noise, other modes or a non-linear decay)", 100*rel)
+		}
+	}
+	if decay := res.window.Cycles * res.delta.Value; decay < littleDecay {
+		r.addWarn("the envelope falls only to %.0f %% over the fit window: the damping rests on a short stretch of decay", 100*math.Exp(-decay))
+	}
+	if zeta.Err > 0.5*zeta.Value {
+		r.addWarn("the damping ratio is uncertain by %.0f %% of its value", 100*zeta.Err/zeta.Value)
+	}
 	if cyc := res.window.Cycles; cyc < fewCycles {
 		r.addWarn("only %.1f cycles above the noise floor: the damping is uncertain", cyc)
 	}
 	if spc := r.period(); spc < fewSamples {
 		r.addWarn("only %.1f samples per cycle: frequency and damping rest on interpolation", spc)
 	}
-	if !r.floorOK && r.cfg.Window.IsZero() {
+	if !r.floorOK && r.cfg.Window == (Span{}) {
 		r.addWarn("the record ends before the ring-down reaches the noise floor")
 	}
 	res.warnings = r.warn
