@@ -8,23 +8,6 @@ import (
 	"github.com/trestle-go/trestle/springnet/element"
 )
 
-// Member results: the forces, stresses, utilisation, Euler buckling check
-// and deflected shape of one bar or beam in one load case.
-//
-// # When shear deformation matters
-//
-// Beams are Euler–Bernoulli by default. Set Beam.Timoshenko for stubby
-// members: the shear part of a cantilever's tip deflection over its bending
-// part is 3·E·I/(κ·G·A·L²) = E·h²/(4·κ·G·L²) for a rectangle of depth h,
-// about 0.78·(h/L)² for steel or concrete (κ = 5/6, G = E/2.6): 3 % at
-// L/h = 5, 0.8 % at L/h = 10, but 20 % at L/h = 2 (Timoshenko & Gere,
-// Mechanics of Materials, shear deflections). Below L/h ≈ 5–10 (short
-// piers, deep base beams, squat legs) use Timoshenko. Timber, with G/E
-// near 1/16 along the grain (Wood Handbook), shows 5 % even at L/h = 10.
-// Masonry and concrete piers are usually squat (L/h of 1 to 3), where
-// shear deformation is of the order of the bending deformation or larger:
-// always model them as Timoshenko.
-
 // MemberResult holds the results of one bar or beam in one load case.
 //
 // Forces are in the member's local axes (x from end a to end b; see Beam),
@@ -33,6 +16,20 @@ import (
 // positive); Local holds the forces the nodes apply to the member ends in
 // the matrix convention (element.BeamForces.Local). For a bar only N is
 // non-zero.
+//
+// Shear deformation: beams are Euler–Bernoulli by default. Set
+// Beam.Timoshenko for stubby members: the shear part of a cantilever's tip
+// deflection over its bending part is 3·E·I/(κ·G·A·L²) = E·h²/(4·κ·G·L²)
+// for a rectangle of depth h, about 0.78·(h/L)² for steel or concrete
+// (κ = 5/6, G = E/2.6): 3 % at L/h = 5, 0.8 % at L/h = 10, but 20 % at
+// L/h = 2 (Timoshenko & Gere, Mechanics of Materials, shear deflections).
+// Below L/h ≈ 5–10 (short piers, deep base beams, squat legs) use
+// Timoshenko. Timber, with G/E near 1/16 along the grain (Wood Handbook),
+// shows 5 % even at L/h = 10. Masonry and concrete piers are usually squat
+// (L/h of 1 to 3), where shear adds 8 % to 75 % of the bending deflection
+// (masonry, G = 0.4·E): model them as Timoshenko beams, as the usual
+// pier-rigidity formula Δ = P·h³/(3EI) + 1.2·P·h/(A·G) for a cantilever
+// pier does.
 type MemberResult struct {
 	Element ElementID
 	Name    string
