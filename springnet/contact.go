@@ -78,7 +78,10 @@ func (nt *net) footFZ(i int, u []float64) float64 {
 }
 
 // tipOrMechanism turns a factorisation failure with feet lifted into a
-// *TippingError; with every foot down it is a plain mechanism.
+// *TippingError; with every foot down it is a plain mechanism, and so it is
+// when the free node is the node of a lifted foot (a pin-jointed leg whose
+// foot left the floor swings freely: that is no tipping, but the model
+// cannot say what the leg does).
 func (nt *net) tipOrMechanism(err error, name string, co []int) error {
 	var lifted []string
 	for _, i := range co {
@@ -87,13 +90,33 @@ func (nt *net) tipOrMechanism(err error, name string, co []int) error {
 		}
 	}
 	var me *MechanismError
-	if len(lifted) == 0 || !errors.As(err, &me) {
-		if me != nil {
-			me.Case = name
-		}
+	if !errors.As(err, &me) {
 		return err
 	}
+	me.Case = name
+	if len(lifted) == 0 {
+		return me
+	}
+	if f := nt.liftedFootAt(me.Node, co); f != "" {
+		me.Motion = fmt.Sprintf("foot %q lifted off and its node hangs free (a pin-jointed leg); "+
+			"make the leg a beam, brace the foot, or bolt it down", f)
+		return me
+	}
 	return &TippingError{Case: name, Lifted: lifted}
+}
+
+// liftedFootAt returns the name of a lifted compression-only foot at node
+// n, or "".
+func (nt *net) liftedFootAt(n NodeID, co []int) string {
+	if n < 0 {
+		return ""
+	}
+	for _, i := range co {
+		if !nt.el[i].active && nt.m.elems[i].a == n {
+			return nt.m.elems[i].foot.Name
+		}
+	}
+	return ""
 }
 
 // tipping follows the contact path for loads fg + λ·fv from λ = 1 upward,
@@ -113,6 +136,10 @@ func (s *Solver) tipping(nt *net, fg, fv []float64, co []int, tol float64) (Tipp
 		if err := s.factor(nt); err != nil {
 			var me *MechanismError
 			if errors.As(err, &me) && last != "" {
+				if f := nt.liftedFootAt(me.Node, co); f != "" {
+					return Tipping{Note: fmt.Sprintf("the contact path stopped at %.4g × the loads: "+
+						"foot %q lifted off and its node hangs free (a pin-jointed leg)", lam, f)}, nil
+				}
 				return Tipping{Factor: lam, Found: true, LastFoot: last}, nil
 			}
 			return Tipping{}, err

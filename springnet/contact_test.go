@@ -139,3 +139,53 @@ func boltedCopy(t *testing.T, b, d, h, w, p float64) *springnet.Model {
 	m.AddLoad(top, springnet.Load{FX: p})
 	return &m
 }
+
+func TestLiftedFootOnPinnedLeg(t *testing.T) {
+	// Legs under a rigid top, on loose feet, pushed diagonally so that one
+	// foot lifts (as in "diagonal, one foot lifts"). With beam legs the
+	// lifted foot hangs on its leg and the stand stands on three feet;
+	// with pin-ended bar legs the lifted foot's node swings freely, which
+	// must come out as a mechanism naming the foot, not as tipping.
+	const b, d, h, w = 0.4, 0.6, 1.5, 1000.0
+	build := func(beams bool) *springnet.Model {
+		var m springnet.Model
+		var tops, feet []springnet.NodeID
+		for i, p := range [4][2]float64{{b / 2, -d / 2}, {b / 2, d / 2}, {-b / 2, d / 2}, {-b / 2, -d / 2}} {
+			f := m.AddNode("", springnet.Vec{X: p[0], Y: p[1]})
+			feet = append(feet, f)
+			top := m.AddNode("", springnet.Vec{X: p[0], Y: p[1], Z: 0.8})
+			if beams {
+				m.AddBeam(f, top, springnet.Beam{Raw: springnet.RawBeam{EA: 1e9, EIy: 1e6, EIz: 1e6, GJ: 1e6}})
+			} else {
+				m.AddBar(f, top, springnet.Bar{EA: 1e9})
+			}
+			m.AddFoot(f, springnet.Foot{Name: "foot " + string(rune('A'+i)), K: springnet.Stiffness6{X: 1e6, Y: 1e6, Z: 1e7}, CompressionOnly: true})
+			tops = append(tops, top)
+		}
+		if !beams {
+			// One brace per side so that the pin-jointed frame does not sway.
+			for i := range feet {
+				m.AddBar(feet[i], tops[(i+1)%4], springnet.Bar{EA: 1e9})
+			}
+		}
+		g := m.AddRigidGroup("top", tops...)
+		m.SetGravity(springnet.DefaultCase, springnet.Gravity(1))
+		m.AddMass(g, springnet.Mass{Kg: w / springnet.StandardGravity})
+		mt := m.AddMount("push", springnet.Vec{Z: h}, g)
+		m.AddLoad(mt, springnet.Load{FX: 120 / math.Sqrt2, FY: 120 / math.Sqrt2})
+		return &m
+	}
+	t.Run("beam legs", func(t *testing.T) {
+		res, err := springnet.Static(build(true), nil)
+		require.NoError(t, err)
+		lifted := res.Case(0).Lifted()
+		require.Len(t, lifted, 1)
+		assert.Equal(t, "foot D", build(true).ElementName(lifted[0]))
+	})
+	t.Run("bar legs", func(t *testing.T) {
+		_, err := springnet.Static(build(false), nil)
+		var me *springnet.MechanismError
+		require.True(t, errors.As(err, &me), "got %v", err)
+		assert.Contains(t, me.Motion, `foot "foot D" lifted off`)
+	})
+}

@@ -205,6 +205,7 @@ type Tipping struct {
 	Factor   float64
 	Found    bool
 	LastFoot string
+	Note     string // why the path stopped without an answer, when it did
 }
 
 // CaseResult holds the static results of one load case or combination.
