@@ -96,9 +96,11 @@ with the fitted envelope and the spectrum.`,
 	if set.Band, err = parseBand("band", *band); err != nil {
 		return err
 	}
-	if set.Window, err = parseBand("window", *window); err != nil {
+	win, err := parseBand("window", *window)
+	if err != nil {
 		return err
 	}
+	set.Window = ringdown.Span{Start: win.Low, End: win.High}
 	set.Centre = *centre
 	var picFormat string
 	if *picture != "" {
