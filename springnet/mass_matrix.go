@@ -1,0 +1,194 @@
+package springnet
+
+import (
+	"errors"
+	"fmt"
+	"math"
+
+	"github.com/trestle-go/trestle/springnet/element"
+	"github.com/trestle-go/trestle/springnet/sparse"
+	"gonum.org/v1/gonum/mat"
+)
+
+// MassMatrix selects how the mass of bars and beams is distributed over
+// their end DOF. Point masses (AddMass) are the same either way; springs
+// and feet are massless.
+type MassMatrix int
+
+const (
+	// Consistent uses the consistent mass matrices of package element
+	// (the same shape functions as the stiffness): more accurate per
+	// element, the usual choice for beams. It is the zero value.
+	Consistent MassMatrix = iota
+	// Lumped puts half of a member's mass on the translations of each end
+	// (beams: HRZ rotary terms on the bending rotations, torsional
+	// inertia on the twist).
+	Lumped
+)
+
+// String returns "consistent" or "lumped".
+func (k MassMatrix) String() string {
+	switch k {
+	case Consistent:
+		return "consistent"
+	case Lumped:
+		return "lumped"
+	}
+	return fmt.Sprintf("MassMatrix(%d)", int(k))
+}
+
+// elemConsistentMass writes the consistent mass matrix of element i over
+// the same DOF list elemStiffness uses for bars and beams [kg, kg·m,
+// kg·m²]; springs and feet are massless (0 DOF).
+func (nt *net) elemConsistentMass(i int, k *[12][12]float64, dofs *[12]edof) int {
+	e := &nt.m.elems[i]
+	p := &nt.el[i]
+	nd := 0
+	switch e.kind {
+	case BarKind:
+		mb := element.BarConsistentMass(p.frame, p.mp.lineMass)
+		for c := 0; c < 3; c++ {
+			dofs[nd] = edof{e.a, c}
+			nd++
+		}
+		for c := 0; c < 3; c++ {
+			dofs[nd] = edof{e.b, c}
+			nd++
+		}
+		for r := 0; r < 6; r++ {
+			copy(k[r][:6], mb[r][:])
+		}
+	case BeamKind:
+		mb := element.BeamConsistentMass(p.frame, p.bp, p.mp.lineMass, p.mp.polarMass)
+		var keep [12]int
+		for c := 0; c < 12; c++ {
+			n, comp := e.a, c
+			if c >= 6 {
+				n, comp = e.b, c-6
+			}
+			if comp >= 3 && ((c < 6 && !p.rotA) || (c >= 6 && !p.rotB)) {
+				continue
+			}
+			keep[nd] = c
+			dofs[nd] = edof{n, comp}
+			nd++
+		}
+		for r := 0; r < nd; r++ {
+			for c := 0; c < nd; c++ {
+				k[r][c] = mb[keep[r]][keep[c]]
+			}
+		}
+	}
+	return nd
+}
+
+// assembleMassOf returns the mass matrix of the chosen kind over the free
+// equations, point masses included through the rigid transformation
+// M = Tᵀ·diag(m, m, m, J)·T (pointMassBlocks).
+func (nt *net) assembleMassOf(b *sparse.Builder, kind MassMatrix) *sparse.Matrix {
+	if kind == Lumped {
+		return nt.assembleMass(b)
+	}
+	return nt.assembleWith(b, nt.elemConsistentMass, nt.pointMassBlocks())
+}
+
+// BoxInertia returns the moments of inertia [kg·m²] of a uniform
+// rectangular block of mass kg [kg] and edge lengths a, b, c [m] along X,
+// Y and Z, about axes through its centre parallel to X, Y and Z:
+//
+//	Jx = m(b² + c²)/12,   Jy = m(a² + c²)/12,   Jz = m(a² + b²)/12
+//
+// (solid cuboid; any dynamics text, e.g. Meriam & Kraige, Engineering
+// Mechanics: Dynamics, table of mass moments of inertia). A machine known
+// only by its mass and bounding box is often modelled so (an estimate:
+// real machines are denser low down). Use the result as Mass.Inertia.
+func BoxInertia(kg, a, b, c float64) Vec {
+	return Vec{kg * (b*b + c*c) / 12, kg * (a*a + c*c) / 12, kg * (a*a + b*b) / 12}
+}
+
+// Machine is a rigid machine given by its mass, the offset of its centre
+// of gravity from the place it is attached to, and its inertia tensor
+// about the centre of gravity in global axes (symmetric; off-diagonal
+// terms are the tensor's, J_xy = −∫xy dm, not the products of inertia).
+type Machine struct {
+	Kg      float64       // mass [kg]
+	CG      Vec           // centre of gravity relative to the place [m]
+	Inertia [3][3]float64 // inertia tensor about the CG, global axes [kg·m²]
+}
+
+// MachineBox returns a Machine of mass kg [kg] whose inertia is that of a
+// uniform block of size (X, Y, Z edge lengths) [m] centred on its centre
+// of gravity cg (see BoxInertia).
+func MachineBox(kg float64, cg, size Vec) Machine {
+	j := BoxInertia(kg, size.X, size.Y, size.Z)
+	return Machine{Kg: kg, CG: cg, Inertia: [3][3]float64{{j.X, 0, 0}, {0, j.Y, 0}, {0, 0, j.Z}}}
+}
+
+// Masses returns point masses (for Model.AddMass on the same place) that
+// together have exactly the machine's mass, centre of gravity and inertia
+// tensor. A tensor with no off-diagonal terms gives one Mass. Otherwise,
+// since Mass holds only moments about axes parallel to X, Y and Z, the
+// tensor is built from three pairs of equal masses placed symmetrically
+// about the CG along its principal axes eₖ: a pair of total mass m/3 at
+// ±dₖ·eₖ adds (m/3)·dₖ²·(I − eₖeₖᵀ), so with aₖ = (m/3)·dₖ² and principal
+// moments Jₖ
+//
+//	J = Σₖ (S − aₖ)·eₖeₖᵀ,  S = Σ aₖ  ⇒  aₖ = (J₁ + J₂ + J₃)/2 − Jₖ
+//
+// which is non-negative exactly when the tensor obeys the triangle
+// inequality of a physical body. The pairs change neither the weight nor
+// its line of action (they are symmetric about the CG). It fails for a
+// negative or non-finite mass, an asymmetric tensor, or one no body can
+// have.
+func (mc Machine) Masses() ([]Mass, error) {
+	if !finite(mc.Kg) || mc.Kg < 0 || !mc.CG.finite() {
+		return nil, fmt.Errorf("springnet: machine: mass %g kg at %v must be finite and non-negative", mc.Kg, mc.CG)
+	}
+	j := mc.Inertia
+	scale := math.Abs(j[0][0]) + math.Abs(j[1][1]) + math.Abs(j[2][2])
+	for r := 0; r < 3; r++ {
+		for c := 0; c < 3; c++ {
+			if !finite(j[r][c]) {
+				return nil, errors.New("springnet: machine: inertia tensor is not finite")
+			}
+			if math.Abs(j[r][c]-j[c][r]) > 1e-12*scale {
+				return nil, fmt.Errorf("springnet: machine: inertia tensor is not symmetric (J[%d][%d] = %g, J[%d][%d] = %g)", r, c, j[r][c], c, r, j[c][r])
+			}
+		}
+	}
+	if j[0][1] == 0 && j[0][2] == 0 && j[1][2] == 0 {
+		d := Vec{j[0][0], j[1][1], j[2][2]}
+		if d.X < 0 || d.Y < 0 || d.Z < 0 || d.X > d.Y+d.Z+1e-12*scale || d.Y > d.X+d.Z+1e-12*scale || d.Z > d.X+d.Y+1e-12*scale {
+			return nil, fmt.Errorf("springnet: machine: moments of inertia %v are not those of a body (each must be at most the sum of the other two)", d)
+		}
+		return []Mass{{Kg: mc.Kg, Offset: mc.CG, Inertia: d}}, nil
+	}
+	if !(mc.Kg > 0) {
+		return nil, errors.New("springnet: machine: an inertia tensor needs a positive mass")
+	}
+	s := mat.NewSymDense(3, nil)
+	for r := 0; r < 3; r++ {
+		for c := r; c < 3; c++ {
+			s.SetSym(r, c, (j[r][c]+j[c][r])/2)
+		}
+	}
+	var es mat.EigenSym
+	if !es.Factorize(s, true) {
+		return nil, errors.New("springnet: machine: inertia tensor: eigen decomposition failed")
+	}
+	jk := es.Values(nil)
+	var ev mat.Dense
+	es.VectorsTo(&ev)
+	half := (jk[0] + jk[1] + jk[2]) / 2
+	out := make([]Mass, 0, 6)
+	for k := 0; k < 3; k++ {
+		a := half - jk[k]
+		if a < -1e-12*scale || jk[k] < -1e-12*scale {
+			return nil, fmt.Errorf("springnet: machine: principal moments %.6g, %.6g, %.6g kg·m² are not those of a body (each must be at most the sum of the other two)", jk[0], jk[1], jk[2])
+		}
+		d := math.Sqrt(math.Max(a, 0) / (mc.Kg / 3))
+		e := Vec{ev.At(0, k), ev.At(1, k), ev.At(2, k)}
+		out = append(out, Mass{Kg: mc.Kg / 6, Offset: mc.CG.Add(e.Scale(d))}, Mass{Kg: mc.Kg / 6, Offset: mc.CG.Sub(e.Scale(d))})
+	}
+	return out, nil
+}
