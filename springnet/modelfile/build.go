@@ -73,6 +73,8 @@ type builder struct {
 	secs   map[string]sections.Section
 	badSec map[string]bool
 	lines  map[string]int // "kind\x00name" -> line, for Validate messages
+
+	inGroup map[springnet.NodeID]bool // nodes in a rigid group, once groups are built
 }
 
 func (b *builder) setLine(kind, name string, line int) {
@@ -114,7 +116,11 @@ func (b *builder) run() {
 	node := func(line int, what, n string) (springnet.NodeID, bool) {
 		id, ok := b.f.NodeIDs[n]
 		if !ok {
-			b.el.add(line, "%s names unknown node %q%s", what, n, suggest(n, nodeNames))
+			hint := ""
+			if !b.el.full() {
+				hint = suggest(n, nodeNames)
+			}
+			b.el.add(line, "%s names unknown node %q%s", what, n, hint)
 		}
 		return id, ok
 	}
@@ -363,6 +369,10 @@ func (b *builder) place(line int, what, name string, mounts bool) springnet.Plac
 	case 1:
 		return found[0]
 	case 0:
+		if b.el.full() {
+			b.el.add(line, "%s names unknown item %q", what, name)
+			return nil
+		}
 		var all []string
 		for n := range b.f.NodeIDs {
 			all = append(all, n)
@@ -390,14 +400,15 @@ func (b *builder) place(line int, what, name string, mounts bool) springnet.Plac
 }
 
 func (b *builder) groupedNode(n springnet.NodeID) bool {
-	for g := 0; g < b.m.NumGroups(); g++ {
-		for _, x := range b.m.GroupNodes(springnet.GroupID(g)) {
-			if x == n {
-				return true
+	if b.inGroup == nil {
+		b.inGroup = map[springnet.NodeID]bool{}
+		for g := 0; g < b.m.NumGroups(); g++ {
+			for _, x := range b.m.GroupNodes(springnet.GroupID(g)) {
+				b.inGroup[x] = true
 			}
 		}
 	}
-	return false
+	return b.inGroup[n]
 }
 
 func (b *builder) laterMount(name string) bool {

@@ -63,6 +63,10 @@ type errList struct {
 	errs []*Error
 }
 
+// full reports whether enough errors are collected that more detail
+// (suggestions, which cost a search over all names) is not worth it.
+func (l *errList) full() bool { return len(l.errs) > maxErrors }
+
 func (l *errList) add(line int, format string, args ...any) {
 	l.errs = append(l.errs, &Error{File: l.file, Line: line, Msg: fmt.Sprintf(format, args...)})
 }

@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"io"
 	"math"
+	"sort"
 	"strconv"
 	"strings"
 	"unicode/utf8"
@@ -479,13 +480,8 @@ func (t *tab) ends() ([][2]string, bool) {
 // mergeMemberOrder puts the members in file order (bars, beams and
 // springs may be interleaved in the file).
 func (rd *reader) mergeMemberOrder(c *Contents) {
-	ms := c.Members
-	// Stable insertion by line keeps the expansion order within a table.
-	for i := 1; i < len(ms); i++ {
-		for j := i; j > 0 && ms[j].Line < ms[j-1].Line; j-- {
-			ms[j], ms[j-1] = ms[j-1], ms[j]
-		}
-	}
+	// A stable sort by line keeps the expansion order within a table.
+	sort.SliceStable(c.Members, func(i, j int) bool { return c.Members[i].Line < c.Members[j].Line })
 }
 
 func (rd *reader) feet(top *tab, c *Contents) {
