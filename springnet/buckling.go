@@ -31,6 +31,7 @@ type BucklingResult struct {
 	c       CaseID
 	static  *CaseResult
 	factors []float64
+	resid   []float64
 	vecs    [][]float64 // per mode, over the equations; largest translation 1
 }
 
@@ -153,6 +154,7 @@ func Buckling(m *Model, c CaseID, s *BucklingSettings) (*BucklingResult, error) 
 			return nil, fmt.Errorf("springnet: buckling: case %q: mode %d is not finite", name, i)
 		}
 		res.factors = append(res.factors, lam)
+		res.resid = append(res.resid, er.Residuals[i])
 		res.vecs = append(res.vecs, nt.normaliseMode(v))
 	}
 	if len(res.factors) < modes {
@@ -196,6 +198,13 @@ func (r *BucklingResult) NumModes() int { return len(r.factors) }
 
 // Case returns the load case analysed.
 func (r *BucklingResult) Case() CaseID { return r.c }
+
+// Level returns the material level of the analysis.
+func (r *BucklingResult) Level() materials.Level { return r.nt.level }
+
+// Residual returns the relative residual ‖K·φ + λ·Kg·φ‖ / (‖K‖₁·‖φ‖) of
+// mode i (see package eigen).
+func (r *BucklingResult) Residual(i int) float64 { return r.resid[r.mode(i)] }
 
 // Static returns the static result of the case whose axial forces gave
 // the geometric stiffness.
