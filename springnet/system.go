@@ -1,7 +1,6 @@
 package springnet
 
 import (
-	"bufio"
 	"fmt"
 	"io"
 
@@ -102,38 +101,18 @@ func (s *System) EquationOf(p Place, d DOF) (eq int, ok bool) {
 func (s *System) Point(i int) Vec { return vecOf(s.nt.dm.coords[i]) }
 
 // WriteK writes K in Matrix Market coordinate format (symmetric, lower
-// triangle, 1-based).
+// triangle, 1-based), with sparse.WriteMatrix.
 func (s *System) WriteK(w io.Writer) error {
-	return writeMatrixMarket(w, s.k, "stiffness K [N/m, N, N*m/rad], trestle springnet")
+	return sparse.WriteMatrix(w, s.k, "stiffness K [N/m, N, N*m/rad], trestle springnet")
 }
 
 // WriteM writes the lumped mass matrix in Matrix Market coordinate format.
 func (s *System) WriteM(w io.Writer) error {
-	return writeMatrixMarket(w, s.m, "lumped mass M [kg, kg*m, kg*m^2], trestle springnet")
+	return sparse.WriteMatrix(w, s.m, "lumped mass M [kg, kg*m, kg*m^2], trestle springnet")
 }
 
 // WriteLoad writes the load vector of case c in Matrix Market array format.
 func (s *System) WriteLoad(w io.Writer, c CaseID) error {
 	name := s.nt.m.CaseName(c)
-	bw := bufio.NewWriter(w)
-	fmt.Fprintf(bw, "%%%%MatrixMarket matrix array real general\n%% load vector of case %q [N, N*m], trestle springnet\n%d 1\n", name, s.N())
-	for _, v := range s.loads[c] {
-		fmt.Fprintf(bw, "%.17g\n", v)
-	}
-	return bw.Flush()
-}
-
-// writeMatrixMarket writes a symmetric sparse matrix (the sparse package
-// has no writer yet; this small one follows the NIST Matrix Market
-// exchange format, coordinate real symmetric).
-func writeMatrixMarket(w io.Writer, a *sparse.Matrix, comment string) error {
-	bw := bufio.NewWriter(w)
-	fmt.Fprintf(bw, "%%%%MatrixMarket matrix coordinate real symmetric\n%% %s\n%d %d %d\n", comment, a.N(), a.N(), a.NNZ())
-	for j := 0; j < a.N(); j++ {
-		rows, vals := a.Col(j)
-		for p, r := range rows {
-			fmt.Fprintf(bw, "%d %d %.17g\n", r+1, j+1, vals[p])
-		}
-	}
-	return bw.Flush()
+	return sparse.WriteVector(w, s.loads[c], fmt.Sprintf("load vector of case %q [N, N*m], trestle springnet", name))
 }
