@@ -39,7 +39,8 @@ type Options struct {
 	// geometric nested dissection may use it.
 	Coords [][3]float64
 	// PivotTol is the relative pivot tolerance: a pivot d_k with
-	// |d_k| <= PivotTol·|a_kk| marks column k as singular. Default 1e-11.
+	// |d_k| <= PivotTol·|a_kk| marks column k as singular (where a_kk is
+	// zero, the largest |entry| of column k replaces it). Default 1e-11.
 	PivotTol float64
 }
 
@@ -86,9 +87,12 @@ type Factor struct {
 	cmap  []int
 	cdiag []int // position in cx of each column's diagonal, or -1
 	cx    []float64
+	ci    []int     // row indices of C's lower triangle
+	scale []float64 // largest |entry| of each column of C
 	fo    []int // offset of C's entry in its supernode's front
 
-	nnzl int // entries of L including the diagonal (exact, no padding)
+	nnzl  int     // entries of L including the diagonal (exact, no padding)
+	flops float64 // Σ colcount²
 
 	// Supernodes, in postorder: columns sfirst[s]..sfirst[s+1]-1; row
 	// structure srow[sptr[s]:sptr[s+1]] (its own columns first); L block
@@ -109,6 +113,7 @@ type Factor struct {
 	work    []float64
 	gw      gemmPool
 	y       []float64
+	xblk    []float64 // SolveMany workspace
 	ok      bool
 	neg     int
 	pos     int
@@ -158,13 +163,15 @@ func (f *Factor) analyzePerm(a *Matrix, perm0 []int) error {
 	pat = permuteLower(a, f.inv)
 	parent = etree(n, pat.cp, pat.ci)
 	cc := colCounts(n, pat.cp, pat.ci, parent)
-	f.nnzl = 0
+	f.nnzl, f.flops = 0, 0
 	for _, c := range cc {
 		f.nnzl += c
+		f.flops += float64(c) * float64(c)
 	}
 	f.aColPtr = append(f.aColPtr[:0], a.colPtr...)
 	f.aRowIdx = append(f.aRowIdx[:0], a.rowIdx...)
-	f.cp, f.cmap = pat.cp, pat.cmap
+	f.cp, f.ci, f.cmap = pat.cp, pat.ci, pat.cmap
+	f.scale = make([]float64, n)
 	f.cx = make([]float64, len(pat.ci))
 	f.cdiag = make([]int, n)
 	for j := 0; j < n; j++ {
@@ -339,6 +346,17 @@ func (f *Factor) Factorize(a *Matrix) error {
 	for p, q := range f.cmap {
 		f.cx[q] = a.val[p]
 	}
+	// Column scales: the pivot test of a column with a zero diagonal is
+	// relative to the column's largest entry instead.
+	clear(f.scale)
+	for j := 0; j < f.n; j++ {
+		for q := f.cp[j]; q < f.cp[j+1]; q++ {
+			v := math.Abs(f.cx[q])
+			i := f.ci[q]
+			f.scale[i] = max(f.scale[i], v)
+			f.scale[j] = max(f.scale[j], v)
+		}
+	}
 	f.neg, f.pos = 0, 0
 	top := 0
 	for s := 0; s < f.ns; s++ {
@@ -408,8 +426,12 @@ func (f *Factor) checkPivot(col int, dj float64) error {
 	if q := f.cdiag[col]; q >= 0 {
 		diag = f.cx[q]
 	}
+	ref := math.Abs(diag)
+	if diag == 0 {
+		ref = f.scale[col]
+	}
 	switch {
-	case math.IsNaN(dj) || math.Abs(dj) <= f.opt.PivotTol*math.Abs(diag) || diag == 0:
+	case math.IsNaN(dj) || math.Abs(dj) <= f.opt.PivotTol*ref || ref == 0:
 		return &PivotError{Col: f.perm[col], Pivot: dj, Diagonal: diag}
 	case dj < 0 && f.opt.Mode == Cholesky:
 		return &PivotError{Col: f.perm[col], Pivot: dj, Diagonal: diag, Negative: true}
