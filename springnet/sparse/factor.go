@@ -89,7 +89,7 @@ type Factor struct {
 	cx    []float64
 	ci    []int     // row indices of C's lower triangle
 	scale []float64 // largest |entry| of each column of C
-	fo    []int // offset of C's entry in its supernode's front
+	fo    []int     // offset of C's entry in its supernode's front
 
 	nnzl  int     // entries of L including the diagonal (exact, no padding)
 	flops float64 // Σ colcount²
