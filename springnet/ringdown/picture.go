@@ -93,15 +93,16 @@ func (r *reduction) picture(sf sineFit, nom *MethodEstimate) picture {
 		sig = 2 * math.Pi * nom.DampedFrequency.Value * nom.Ratio.Value / math.Sqrt(1-nom.Ratio.Value*nom.Ratio.Value)
 	}
 	tEnd := r.rec.Time(n - 1)
+	tStrike := r.rec.Time(r.strike)
 	for i := range curvePts + 1 {
 		t := r.rec.Start + float64(i)/curvePts*(tEnd-r.rec.Start)
-		if t < t0-0.25*(pic.winX[1]-t0) {
-			continue // the extrapolation back to the strike grows without bound
+		if t < tStrike {
+			continue // before the strike there is no ring-down to draw
 		}
 		pic.fit = append(pic.fit, plotter.XY{X: t, Y: amp * math.Exp(-sig*(t-t0))})
 	}
-	// Spectrum up to three times the mode (or past the band).
-	fmax := math.Min(r.fs/2, math.Max(3*r.f0, 1.5*r.cfg.band.High))
+	// Spectrum up to four times the mode (or past the band).
+	fmax := math.Min(r.fs/2, math.Max(4*r.f0, 1.5*r.cfg.band.High))
 	kmax := min(len(r.over.mag)-1, int(fmax/r.over.df))
 	peak := 0.0
 	for _, v := range r.over.mag[1 : kmax+1] {
@@ -170,8 +171,8 @@ var (
 	colTrace  = color.RGBA{R: 90, G: 90, B: 90, A: 255}
 	colEnv    = color.RGBA{R: 70, G: 130, B: 200, A: 255}
 	colFit    = color.RGBA{R: 210, G: 60, B: 40, A: 255}
-	colWindow = color.RGBA{R: 255, G: 200, B: 80, A: 90}
-	colBand   = color.RGBA{R: 120, G: 200, B: 120, A: 70}
+	colWindow = color.NRGBA{R: 255, G: 190, B: 60, A: 70}
+	colBand   = color.NRGBA{R: 100, G: 190, B: 100, A: 60}
 )
 
 // shade returns a filled rectangle from x0 to x1 spanning y0 to y1.
@@ -182,6 +183,7 @@ func shade(x0, x1, y0, y1 float64, c color.Color) (*plotter.Polygon, error) {
 	}
 	pg.Color = c
 	pg.LineStyle.Width = 0
+	pg.LineStyle.Color = color.Transparent
 	return pg, nil
 }
 
@@ -218,7 +220,11 @@ func (p picture) recordPlot() (*plot.Plot, error) {
 	env.Width = vg.Points(0.8)
 	pl.Add(win, tr, env)
 	pl.Legend.Add("fit window", win)
-	pl.Legend.Add("signal", tr)
+	if p.band.IsZero() {
+		pl.Legend.Add("signal (less its trend)", tr)
+	} else {
+		pl.Legend.Add(fmt.Sprintf("signal, band-passed %.4g–%.4g Hz", p.band.Low, p.band.High), tr)
+	}
 	pl.Legend.Add("envelope (analytic signal)", env)
 	if len(p.fit) > 1 {
 		var lo plotter.XYs
