@@ -28,6 +28,8 @@ type MechanismError struct {
 	Case   string  // the load case, when the mechanism appeared with feet lifted
 }
 
+// Error names the free node or group and direction, the motion if known,
+// and the usual cure.
 func (e *MechanismError) Error() string {
 	who := fmt.Sprintf("node %q", e.Name)
 	if e.Group >= 0 {
@@ -53,6 +55,7 @@ type ConditionError struct {
 	Residual float64 // relative residual ‖K·u − f‖/‖f‖
 }
 
+// Error gives the residual and says the result is suspect.
 func (e *ConditionError) Error() string {
 	return fmt.Sprintf("springnet: %s: relative residual %.3g exceeds %.0e: the system is ill-conditioned "+
 		"(a nearly free part, or stiffnesses far apart); results are suspect", e.Case, e.Residual, MaxResidual)
@@ -67,6 +70,7 @@ type TippingError struct {
 	Lifted []string
 }
 
+// Error says the stand tips and which feet were lifted.
 func (e *TippingError) Error() string {
 	return fmt.Sprintf("springnet: case %q: the stand tips: no stable set of feet stays in contact "+
 		"(lifted: %s); add weight, widen the base or anchor the feet. "+

@@ -23,9 +23,9 @@ type MountID int
 // CaseID is a handle to a load case or a combination of a Model.
 type CaseID int
 
-// DefaultCase is the first load case of a model. AddLoad and AddMass-free
-// helpers that take no case use it; it is created (named "default") on first
-// use if AddLoadCase has not been called before.
+// DefaultCase is the first load case of a model. AddLoad and SetGravity on
+// it create it (named "default") if AddLoadCase has not been called yet;
+// otherwise it is the first case added.
 const DefaultCase CaseID = 0
 
 // Place is where a load, a mass or a mount attaches, and where mount
