@@ -79,6 +79,9 @@ func Buckling(m *Model, c CaseID, s *BucklingSettings) (*BucklingResult, error) 
 	if err := m.Validate(); err != nil {
 		return nil, err
 	}
+	if len(m.cases) == 0 {
+		return nil, errors.New("springnet: buckling: no load cases: add loads (AddLoad) or a case (AddLoadCase)")
+	}
 	m.CaseName(c) // panics on a handle out of range
 	nt, err := prepare(m, s.Level)
 	if err != nil {

@@ -359,3 +359,35 @@ func TestMemberHangingBarSelfWeight(t *testing.T) {
 	assert.InDelta(t, 0, mr.At(1).N, w*memberTol)
 	assert.InEpsilon(t, w/(math.Pi*d*d/4), mr.Tension, memberTol)
 }
+
+func TestMemberCompositeUtilisation(t *testing.T) {
+	// A concrete-filled round tube in compression: the strain is shared,
+	// ε = N/(Es·As + Ec·Ac), and each part carries σᵢ = Eᵢ·ε
+	// (transformed section, perfect bond; Gere & Goodno, Mechanics of
+	// Materials, composite bars). The utilisation is the worse of
+	// σs/fy and σc/fc.
+	const d, tw, l, n = 0.1, 0.004, 1.0, -300e3
+	concrete := materials.Material{Name: "test concrete", Kind: materials.Concrete, E: materials.Exact(30e9),
+		Poisson: 0.2, Density: 2400, Compress: 25e6}
+	sec := sections.Filled{Tube: sections.RoundTube{D: d, T: tw}, Shell: beamSteel(), Fill: concrete}
+	as := math.Pi / 4 * (d*d - (d-2*tw)*(d-2*tw))
+	ac := math.Pi / 4 * (d - 2*tw) * (d - 2*tw)
+	eps := n / (200e9*as + 30e9*ac)
+	us, uc := -200e9*eps/235e6, -30e9*eps/25e6
+	var m springnet.Model
+	a := m.AddNode("a", springnet.Vec{})
+	b := m.AddNode("b", springnet.Vec{Z: l})
+	m.Fix(a, springnet.AllDOF)
+	m.Fix(b, springnet.UX|springnet.UY|springnet.Rotations)
+	e := m.AddBeam(a, b, springnet.Beam{Section: sec})
+	m.AddLoad(b, springnet.Load{FZ: n})
+	res, err := springnet.Static(&m, nil)
+	require.NoError(t, err)
+	mr, err := res.MemberForces(e)
+	require.NoError(t, err)
+	require.Greater(t, uc, us, "the concrete governs in this example (0.82 against 0.58)")
+	assert.InEpsilon(t, uc, mr.Utilisation, memberTol)
+	assert.Equal(t, 25e6, mr.Strength)
+	assert.Equal(t, "compression", mr.Governs)
+	assert.InEpsilon(t, -30e9*eps, mr.Compression, memberTol)
+}
