@@ -83,6 +83,13 @@ type MemberSettings struct {
 	// K overrides the effective-length factor of chosen members (bars or
 	// beams). Factors must be positive and finite.
 	K map[ElementID]EffectiveLength
+	// Sway declares the frame unbraced: an end counts as held sideways
+	// only where a support fixes its translation, so ends that would be
+	// fixed become guided and pinned ends become free (fixed–guided:
+	// K = 1.0, design 1.2; fixed–free: K = 2.0, design 2.1). Without it
+	// the check assumes every end with something attached is held
+	// sideways (a braced frame).
+	Sway bool
 }
 
 func (s *MemberSettings) check(m *Model) error {
@@ -119,11 +126,12 @@ func (s *MemberSettings) check(m *Model) error {
 // of Elastic Stability, effect of shearing force on the critical load).
 //
 // The end conditions are read from the model: releases, joint springs,
-// supports, rigid groups and whether anything else is attached. The check
-// assumes the ends do not move sideways relative to each other unless an
-// end is free or guided: a member of an unbraced (sway) frame buckles at a
-// larger K than these. Use the whole-frame Buckling analysis, which needs
-// no K, or override K, for sway frames. Lateral-torsional, torsional and
+// supports, rigid groups and whether anything else is attached. By default
+// the check assumes the ends do not move sideways relative to each other
+// unless an end is free or guided (a braced frame): a member of an
+// unbraced (sway) frame buckles at a larger K. For sway frames set
+// MemberSettings.Sway, override K, or use the whole-frame Buckling
+// analysis, which needs no K. Lateral-torsional, torsional and
 // local buckling are not checked. A margin is a model result: check
 // stability against local codes and licensed engineering practice.
 type EulerCheck struct {
@@ -205,12 +213,13 @@ func (nt *net) euler(e ElementID, r *MemberResult, s *MemberSettings, touch []in
 		ec.Compression = -nmin
 		ec.Compressed = true
 	}
+	sway := s != nil && s.Sway
 	// Bending about local y deflects along local z, about z along y.
 	axes := [2][3]float64{p.frame.Ey, p.frame.Ez}
 	defl := [2][3]float64{p.frame.Ez, p.frame.Ey}
 	for k := range 2 {
-		ec.EndA[k] = nt.endFixity(x, x.a, true, k, axes[k], defl[k], touch)
-		ec.EndB[k] = nt.endFixity(x, x.b, false, k, axes[k], defl[k], touch)
+		ec.EndA[k] = nt.endFixity(x, x.a, true, k, axes[k], defl[k], touch, sway)
+		ec.EndB[k] = nt.endFixity(x, x.b, false, k, axes[k], defl[k], touch, sway)
 	}
 	var over EffectiveLength
 	if s != nil {
@@ -256,8 +265,9 @@ func (nt *net) euler(e ElementID, r *MemberResult, s *MemberSettings, touch []in
 
 // endFixity classifies end n (a when atA) of member x for bending about
 // local axis k (0: y, 1: z) whose direction in global axes is axis; the
-// end deflects along defl.
-func (nt *net) endFixity(x *elem, n NodeID, atA bool, k int, axis, defl [3]float64, touch []int) EndFixity {
+// end deflects along defl. With sway, only a support holds an end
+// sideways.
+func (nt *net) endFixity(x *elem, n NodeID, atA bool, k int, axis, defl [3]float64, touch []int, sway bool) EndFixity {
 	m := nt.m
 	rotHeld := false
 	inGroup := nt.dm.groupOf[n] >= 0
@@ -294,6 +304,9 @@ func (nt *net) endFixity(x *elem, n NodeID, atA bool, k int, axis, defl [3]float
 		}
 	}
 	free := !inGroup && touch[n] <= 1 && !held
+	if sway {
+		free = inGroup || !held
+	}
 	switch {
 	case free && rotHeld:
 		return EndGuided

@@ -391,3 +391,36 @@ func TestMemberCompositeUtilisation(t *testing.T) {
 	assert.Equal(t, "compression", mr.Governs)
 	assert.InEpsilon(t, -30e9*eps, mr.Compression, memberTol)
 }
+
+func TestMemberEulerCheckSway(t *testing.T) {
+	// A leg fixed at the floor under a rigid top (rigid group): braced,
+	// both ends fixed (K = 0.65 design); declared as a sway frame, the top
+	// is guided (fixed–guided, K = 1.2 design; AISC 360 Commentary Table
+	// C-A-7.1). The whole-frame buckling analysis of the same stand
+	// agrees with the theoretical sway value K = 1
+	// (TestBucklingSwayUnderHeavyMachine).
+	var m springnet.Model
+	var legs []springnet.ElementID
+	var tops []springnet.NodeID
+	for _, x := range []float64{0, 1} {
+		b := m.AddNode("", springnet.Vec{X: x})
+		tp := m.AddNode("", springnet.Vec{X: x, Z: 1})
+		m.Fix(b, springnet.AllDOF)
+		legs = append(legs, m.AddBeam(b, tp, springnet.Beam{Material: beamSteel(), Section: sections.Round{D: 0.03}}))
+		tops = append(tops, tp)
+	}
+	g := m.AddRigidGroup("top", tops...)
+	m.AddLoad(g, springnet.Load{FZ: -1e3})
+	res, err := springnet.Static(&m, nil)
+	require.NoError(t, err)
+	cr := res.Case(springnet.DefaultCase)
+	braced, err := cr.MemberCheck(legs[0], nil)
+	require.NoError(t, err)
+	assert.Equal(t, 0.65, braced.Buckling.KY)
+	assert.Equal(t, springnet.EndFixed, braced.Buckling.EndB[0])
+	sw, err := cr.MemberCheck(legs[0], &springnet.MemberSettings{Sway: true})
+	require.NoError(t, err)
+	assert.Equal(t, 1.2, sw.Buckling.KY)
+	assert.Equal(t, springnet.EndGuided, sw.Buckling.EndB[0])
+	assert.Equal(t, springnet.EndFixed, sw.Buckling.EndA[0])
+}
