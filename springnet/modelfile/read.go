@@ -318,14 +318,13 @@ func (rd *reader) nodes(top *tab, order map[string][]string, c *Contents) {
 		if _, ok := nt.m[name]; !ok {
 			continue
 		}
-		sub := &tab{r: rd, path: "nodes", what: fmt.Sprintf("node %q", name), m: nt.m}
-		at, ok := sub.vec(name, qLength)
-		if !ok {
+		line := nt.line(name)
+		at, err := rd.vecValue(nt.m[name], qLength)
+		if err != nil {
+			rd.errs.add(line, "node %q: %v", name, err)
 			continue
 		}
-		// vec's messages say `node "A1": A1: ...`; acceptable, and the
-		// line is that of the node.
-		c.Nodes = append(c.Nodes, Node{Name: name, At: at, Line: sub.line(name)})
+		c.Nodes = append(c.Nodes, Node{Name: name, At: at, Line: line})
 	}
 }
 

@@ -202,21 +202,28 @@ func (t *tab) vec(key string, q quantity) (springnet.Vec, bool) {
 	if !ok {
 		return springnet.Vec{}, false
 	}
+	out, err := t.r.vecValue(v, q)
+	if err != nil {
+		t.errf(key, "%v", err)
+		return springnet.Vec{}, false
+	}
+	return out, true
+}
+
+func (r *reader) vecValue(v any, q quantity) (springnet.Vec, error) {
 	a, ok := v.([]any)
 	if !ok || len(a) != 3 {
-		t.errf(key, "must be three numbers [x, y, z], not %s", typeWord(v))
-		return springnet.Vec{}, false
+		return springnet.Vec{}, fmt.Errorf("must be three numbers [x, y, z], not %s", typeWord(v))
 	}
 	var out [3]float64
 	for i, x := range a {
-		f, err := t.r.value(x, q)
+		f, err := r.value(x, q)
 		if err != nil {
-			t.errf(key, "%s: %v", "xyz"[i:i+1], err)
-			return springnet.Vec{}, false
+			return springnet.Vec{}, fmt.Errorf("%s: %v", "xyz"[i:i+1], err)
 		}
 		out[i] = f
 	}
-	return springnet.Vec{X: out[0], Y: out[1], Z: out[2]}, true
+	return springnet.Vec{X: out[0], Y: out[1], Z: out[2]}, nil
 }
 
 // rng reads a range: one value (exact), [low, nominal, high], or
