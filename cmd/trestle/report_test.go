@@ -1,0 +1,199 @@
+package main
+
+import (
+	"bytes"
+	"encoding/json"
+	"math"
+	"strings"
+	"testing"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+)
+
+// decodeStrict decodes JSON into v, failing on fields v does not have.
+func decodeStrict(t *testing.T, data string, v any) {
+	t.Helper()
+	dec := json.NewDecoder(strings.NewReader(data))
+	dec.DisallowUnknownFields()
+	require.NoError(t, dec.Decode(v))
+}
+
+// TestFourLegsHandCheck checks the analysis of testdata/four-legs.toml
+// against hand calculations. Four identical legs, L = 1 m, EA = 2e8 N,
+// EI = 1e4 N·m², fixed at the floor, under a rigid top held level.
+// These runs are the ones the golden files four-legs.*.golden pin.
+func TestFourLegsHandCheck(t *testing.T) {
+	const (
+		L, EA, EI = 1.0, 2e8, 1e4
+		press     = 4000.0 // N down at the centre
+		push      = 480.0  // N along X at the centre
+		// tol: direct sparse solves of an 8-node model agree with closed
+		// forms to round-off; 1e-9 leaves room for the residual check.
+		tol = 1e-9
+	)
+	r := trestle(t, "", "analyse", "--json", "testdata/four-legs.toml")
+	require.NoError(t, r.err)
+	var rep AnalysisReport
+	decodeStrict(t, r.stdout, &rep)
+
+	require.Len(t, rep.Mounts, 1)
+	mt := rep.Mounts[0]
+	// Axial springs in parallel: k = 4·EA/L (Gere & Goodno, Mechanics of
+	// Materials, §2.2, δ = PL/EA).
+	assert.InEpsilon(t, 4*EA/L, mt.ZNPerM, tol)
+	// Fixed–guided legs in parallel: k = 4·12·EI/L³ (Roark's Formulas for
+	// Stress and Strain, Table 8.1, case 1e: fixed end, guided end).
+	kx := 4 * 12 * EI / (L * L * L)
+	assert.InEpsilon(t, kx, mt.XNPerM, tol)
+	assert.InEpsilon(t, kx, mt.YNPerM, tol)
+	assert.InEpsilon(t, kx, rep.Governing.SoftestStiffnessNPerM, tol)
+
+	require.Len(t, rep.Cases, 2)
+	pc, sc := rep.Cases[0], rep.Cases[1]
+	require.Equal(t, "press", pc.Name)
+	require.Equal(t, "push", sc.Name)
+	// Press: the top sinks δ = P/(4EA/L); each support carries P/4 by
+	// symmetry; each leg is in compression P/4.
+	assert.InEpsilon(t, press/(4*EA/L), pc.MaxDisplacementM, tol)
+	require.Len(t, pc.Supports, 4)
+	for _, s := range pc.Supports {
+		assert.InEpsilon(t, press/4, s.FZN, tol, s.Node)
+	}
+	for _, m := range pc.Members {
+		assert.InEpsilon(t, -press/4, m.AxialN, tol, m.Name)
+	}
+	// Push: δ = H/kx; each leg takes H/4 in shear and end moments
+	// M = (H/4)·L/2 (fixed–guided: equal and opposite end moments).
+	assert.InEpsilon(t, push/kx, sc.MaxDisplacementM, tol)
+	for _, s := range sc.Supports {
+		assert.InEpsilon(t, -push/4, s.FXN, tol, s.Node)
+		assert.InEpsilon(t, push/4*L/2, math.Abs(s.MYNm), tol, s.Node)
+	}
+	for _, m := range sc.Members {
+		assert.InEpsilon(t, push/4*L/2, m.MaxMomentNm, tol, m.Name)
+	}
+	// Whole-stand sway buckling under press, one element per leg: the
+	// consistent geometric stiffness gives P = 10·EI/L² per leg
+	// (Przemieniecki, Theory of Matrix Structural Analysis, §15; 1.3 %
+	// above Euler's π²·EI/L² for a fixed–guided column with sway).
+	require.NotNil(t, rep.Governing.BucklingFactor)
+	assert.InEpsilon(t, 10*EI/(L*L)/(press/4), *rep.Governing.BucklingFactor, 1e-6)
+	assert.InEpsilon(t, math.Pi*math.Pi*EI/(L*L)/(press/4), *rep.Governing.BucklingFactor, 0.02)
+	// Member Euler check without sway, fixed–fixed, K = 0.65 (AISC 360
+	// Commentary Table C-A-7.1, recommended design value).
+	require.NotNil(t, rep.Governing.EulerMargin)
+	assert.InEpsilon(t, math.Pi*math.Pi*EI/math.Pow(0.65*L, 2)/(press/4), *rep.Governing.EulerMargin, 1e-6)
+	// Equilibrium: reactions balance the applied load.
+	assert.InEpsilon(t, press, pc.Equilibrium.ReactionsN[2], tol)
+	assert.Less(t, pc.Equilibrium.ForceError, 1e-12)
+	assert.Equal(t, cautions, rep.Cautions)
+}
+
+func TestGoldenReports(t *testing.T) {
+	tests := []struct {
+		name string
+		args []string
+	}{
+		{"four-legs.analyse.si", []string{"analyse", "testdata/four-legs.toml"}},
+		{"four-legs.analyse.us", []string{"analyse", "--units", "us", "testdata/four-legs.toml"}},
+		{"four-legs.analyse.json", []string{"analyse", "--json", "testdata/four-legs.toml"}},
+		{"four-legs.ranges", []string{"ranges", "testdata/four-legs.toml"}},
+		{"lathe-stand.analyse", []string{"analyse", "testdata/lathe-stand.toml"}},
+		{"compare", []string{"compare", "testdata/four-legs.toml", "testdata/lathe-stand.toml"}},
+		{"materials.S355", []string{"materials", "S355"}},
+		{"sections.square-tube", []string{"sections", "square-tube 50x3 mm"}},
+		{"sections.square-tube.us", []string{"sections", "--units", "us", "square-tube 50x3 mm"}},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			r := trestle(t, "", tc.args...)
+			require.NoError(t, r.err)
+			golden(t, tc.name, r.stdout)
+		})
+	}
+}
+
+func TestReportsEndWithCautions(t *testing.T) {
+	for _, args := range [][]string{
+		{"demo"},
+		{"analyse", "testdata/four-legs.toml"},
+		{"ranges", "testdata/four-legs.toml"},
+		{"compare", "demo", "testdata/four-legs.toml"},
+		{"ringdown", "testdata/tap.csv"},
+	} {
+		t.Run(strings.Join(args, " "), func(t *testing.T) {
+			r := trestle(t, "", args...)
+			require.NoError(t, r.err)
+			i := strings.LastIndex(r.stdout, "CAUTIONS")
+			require.Greater(t, i, 0)
+			tail := r.stdout[i:]
+			for _, c := range cautions {
+				assert.Contains(t, tail, c)
+			}
+			assert.Contains(t, tail, "licensed engineering practice")
+		})
+	}
+}
+
+func TestJSONRoundTrip(t *testing.T) {
+	tests := []struct {
+		name string
+		args []string
+		into func() any
+	}{
+		{"demo", []string{"demo", "--json"}, func() any { return new(AnalysisReport) }},
+		{"analyse", []string{"analyse", "--json", "testdata/four-legs.toml"}, func() any { return new(AnalysisReport) }},
+		{"ranges", []string{"ranges", "--json", "testdata/four-legs.toml"}, func() any { return new(RangesReport) }},
+		{"compare", []string{"compare", "--json", "demo", "testdata/four-legs.toml"}, func() any { return new(CompareReport) }},
+		{"ringdown", []string{"ringdown", "--json", "testdata/tap.csv"}, func() any { return new(RingdownReport) }},
+		{"materials", []string{"materials", "--json"}, func() any { return new(MaterialsReport) }},
+		{"material", []string{"materials", "--json", "C25/30"}, func() any { return new(MaterialsReport) }},
+		{"sections", []string{"sections", "--json"}, func() any { return new(SectionsReport) }},
+		{"section", []string{"sections", "--json", "filled round-tube 100x4 mm with concrete C25/30"}, func() any { return new(SectionReport) }},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			r := trestle(t, "", tc.args...)
+			require.NoError(t, r.err)
+			v := tc.into()
+			decodeStrict(t, r.stdout, v)
+			var again bytes.Buffer
+			require.NoError(t, writeJSON(&again, v))
+			assert.JSONEq(t, r.stdout, again.String(), "decoding and encoding again loses nothing")
+			var generic map[string]any
+			require.NoError(t, json.Unmarshal([]byte(r.stdout), &generic))
+			assert.Contains(t, generic["schema"], "trestle.", "every report names its schema")
+		})
+	}
+}
+
+func TestDemoEndToEnd(t *testing.T) {
+	// The README's main-job command: go run ./cmd/trestle demo.
+	r := trestle(t, "", "demo")
+	require.NoError(t, r.err)
+	for _, want := range []string{"GOVERNING NUMBERS", "softest mount stiffness", "N/µm", "headstock", "tailstock",
+		"highest utilisation", "buckling factor", "MOUNT STIFFNESS", "Feet", "share", "Members", "Check: applied", "CAUTIONS"} {
+		assert.Contains(t, r.stdout, want)
+	}
+	i, j := strings.Index(r.stdout, "GOVERNING NUMBERS"), strings.Index(r.stdout, "LOAD CASE")
+	assert.True(t, i > 0 && j > i, "governing numbers come before the details")
+	assert.Empty(t, r.stderr)
+
+	var rep AnalysisReport
+	js := trestle(t, "", "demo", "--json")
+	require.NoError(t, js.err)
+	decodeStrict(t, js.stdout, &rep)
+	assert.Equal(t, schemaAnalysis, rep.Schema)
+	assert.NotEmpty(t, rep.Mounts)
+	for _, m := range rep.Mounts {
+		assert.Greater(t, m.PrincipalNPerM[0], 0.0, m.Name)
+	}
+	// The floor carries the stand's weight: sum of the feet in the first
+	// case equals the applied vertical load (equilibrium, Newton's first law).
+	var sum float64
+	for _, f := range rep.Cases[0].Feet {
+		sum += f.FZN
+	}
+	assert.InEpsilon(t, -rep.Cases[0].Equilibrium.AppliedN[2], sum, 1e-9)
+}
