@@ -68,4 +68,3 @@ func diff(want, got string) string {
 	}
 	return b.String()
 }
-
