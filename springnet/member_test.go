@@ -424,3 +424,25 @@ func TestMemberEulerCheckSway(t *testing.T) {
 	assert.Equal(t, springnet.EndGuided, sw.Buckling.EndB[0])
 	assert.Equal(t, springnet.EndFixed, sw.Buckling.EndA[0])
 }
+
+func TestMemberEulerCheckAngle(t *testing.T) {
+	// An angle buckles about its minor principal axis: P_cr =
+	// π²·E·I_min/(K·L)², I_min = (Iy+Iz)/2 − √(((Iy−Iz)/2)² + Iyz²)
+	// (Gere & Goodno, principal axes), here with the composite-rectangle
+	// properties of a sharp 50 × 50 × 5 mm angle (Iy = Iz by symmetry of
+	// the legs, so I_min = Iy − |Iyz|).
+	const b, tk, l, e = 0.05, 0.005, 1.0, 200e9
+	a1, a2 := b*tk, tk*(b-tk)
+	c := (a1*tk/2 + a2*(tk+b)/2) / (a1 + a2) // centroid from the heel, both axes
+	iy := b*tk*tk*tk/12 + a1*(tk/2-c)*(tk/2-c) + tk*(b-tk)*(b-tk)*(b-tk)/12 + a2*((tk+b)/2-c)*((tk+b)/2-c)
+	iyz := a1*(b/2-c)*(tk/2-c) + a2*(tk/2-c)*((tk+b)/2-c)
+	imin := iy - math.Abs(iyz)
+	m, tip, el := beamCantilever(springnet.Vec{Z: 1}, l, springnet.Beam{Material: beamSteel(), Section: sections.Angle{B: b, H: b, T: tk}})
+	m.AddLoad(tip, springnet.Load{FZ: -1e3})
+	res, err := springnet.Static(m, nil)
+	require.NoError(t, err)
+	mr, err := res.Case(springnet.DefaultCase).MemberCheck(el, &springnet.MemberSettings{Basis: springnet.TheoreticalK})
+	require.NoError(t, err)
+	assert.InEpsilon(t, math.Pi*math.Pi*e*imin/(4*l*l), mr.Buckling.Pcr, 1e-9)
+	assert.NotEmpty(t, mr.Buckling.Note)
+}
