@@ -118,6 +118,8 @@ type Factor struct {
 	neg     int
 	pos     int
 	frontMx int
+	stackMx int
+	workMx  int
 }
 
 // Analyze computes the ordering and the symbolic factorisation of A:
@@ -305,16 +307,27 @@ func (f *Factor) analyzePerm(a *Matrix, perm0 []int) error {
 			}
 		}
 	}
-	f.lx = make([]float64, f.lptr[ns])
+	// The numeric storage is allocated by the first Factorize.
+	f.lx, f.front, f.stack, f.work = nil, nil, nil, nil
+	f.stackMx, f.workMx = stackMax, maxWork
 	f.d = make([]float64, n)
+	f.y = make([]float64, n)
+	return nil
+}
+
+// allocNumeric allocates the numeric storage sized by the analysis,
+// unless the previous factorisation left it in place.
+func (f *Factor) allocNumeric() {
+	if f.lx != nil {
+		return
+	}
+	f.lx = make([]float64, f.lptr[f.ns])
 	f.front = make([]float64, f.frontMx)
-	f.stack = make([]float64, stackMax)
-	f.work = make([]float64, maxWork)
+	f.stack = make([]float64, f.stackMx)
+	f.work = make([]float64, f.workMx)
 	if f.gw == nil {
 		f.gw = newGemmPool()
 	}
-	f.y = make([]float64, n)
-	return nil
 }
 
 // NNZL returns the number of entries in L including its unit diagonal
@@ -343,6 +356,7 @@ func (f *Factor) Factorize(a *Matrix) error {
 		}
 	}
 	f.ok = false
+	f.allocNumeric()
 	for p, q := range f.cmap {
 		f.cx[q] = a.val[p]
 	}

@@ -132,7 +132,7 @@ type Stats struct {
 
 // Stats returns the sizes of the last analysis.
 func (f *Factor) Stats() Stats {
-	st := Stats{N: f.n, NNZA: len(f.aRowIdx), NNZL: f.nnzl, Stored: len(f.lx), Supernodes: f.ns, Flops: f.flops}
+	st := Stats{N: f.n, NNZA: len(f.aRowIdx), NNZL: f.nnzl, Stored: f.lptr[f.ns], Supernodes: f.ns, Flops: f.flops}
 	for s := 0; s < f.ns; s++ {
 		st.MaxFront = max(st.MaxFront, f.sptr[s+1]-f.sptr[s])
 	}
