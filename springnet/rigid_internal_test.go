@@ -6,6 +6,8 @@ import (
 
 	"github.com/stretchr/testify/assert"
 	"github.com/stretchr/testify/require"
+
+	"github.com/trestle-go/trestle/materials"
 )
 
 // TestRigidMotionNoForce: a rigid-body motion of the whole model (a
@@ -57,3 +59,32 @@ func TestRigidMotionNoForce(t *testing.T) {
 		}
 	}
 }
+
+// TestSolverKeepsAnalysis: a sweep over material levels, and feet leaving
+// and re-entering contact, change values but not the sparsity pattern, so
+// the Solver analyses once (STYLE.md, "Reuse where it pays").
+func TestSolverKeepsAnalysis(t *testing.T) {
+	var m Model
+	var ns []NodeID
+	for i, c := range [4][2]float64{{0, 0}, {0.4, 0}, {0.4, 0.6}, {0, 0.6}} {
+		n := m.AddNode("", Vec{X: c[0], Y: c[1]})
+		m.AddFoot(n, Foot{Name: string(rune('A' + i)), K: Stiffness6{X: 1e6, Y: 1e6, Z: 1e7}, CompressionOnly: true,
+			Vary: materialsRange(0.5, 1, 2)})
+		ns = append(ns, n)
+	}
+	g := m.AddRigidGroup("stand", ns...)
+	m.SetGravity(DefaultCase, Gravity(1))
+	m.AddMass(g, Mass{Kg: 100, Offset: Vec{X: 0.2, Y: 0.3, Z: 0.5}})
+	m.AddLoad(g, Load{FX: 100, FY: 80}) // lifts a foot
+	var s Solver
+	for _, lv := range []int{0, 1, 2, 0} {
+		res, err := s.Static(&m, &StaticSettings{Level: levelOf(lv)})
+		require.NoError(t, err)
+		require.NotEmpty(t, res.Case(0).Lifted())
+	}
+	assert.Equal(t, 1, s.analyses)
+}
+
+func materialsRange(lo, nom, hi float64) materials.Range { return materials.Range{Low: lo, Nominal: nom, High: hi} }
+
+func levelOf(i int) materials.Level { return materials.Levels[i] }

@@ -19,7 +19,7 @@ type Solver struct {
 	rowIdx  []int
 	hasPat  bool
 	k       *sparse.Matrix
-	lastRes float64
+	analyses int // symbolic analyses done (for tests of reuse)
 }
 
 // factor assembles K for nt and factorises it, analysing the pattern only
@@ -34,6 +34,7 @@ func (s *Solver) factor(nt *net) error {
 			return err
 		}
 		s.keepPattern(s.k)
+		s.analyses++
 	}
 	err := s.f.Factorize(s.k)
 	var pe *sparse.PivotError
