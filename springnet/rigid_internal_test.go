@@ -85,6 +85,8 @@ func TestSolverKeepsAnalysis(t *testing.T) {
 	assert.Equal(t, 1, s.analyses)
 }
 
-func materialsRange(lo, nom, hi float64) materials.Range { return materials.Range{Low: lo, Nominal: nom, High: hi} }
+func materialsRange(lo, nom, hi float64) materials.Range {
+	return materials.Range{Low: lo, Nominal: nom, High: hi}
+}
 
 func levelOf(i int) materials.Level { return materials.Levels[i] }

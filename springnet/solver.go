@@ -13,12 +13,12 @@ import (
 // of contact) only refactorises numerically. The zero Solver is ready to
 // use. A Solver is not safe for concurrent use.
 type Solver struct {
-	f       sparse.Factor
-	b       *sparse.Builder
-	colPtr  []int
-	rowIdx  []int
-	hasPat  bool
-	k       *sparse.Matrix
+	f        sparse.Factor
+	b        *sparse.Builder
+	colPtr   []int
+	rowIdx   []int
+	hasPat   bool
+	k        *sparse.Matrix
 	analyses int // symbolic analyses done (for tests of reuse)
 }
 
