@@ -347,3 +347,27 @@ func MaterialEnergies(c *CaseResult) []EnergyShare {
 	bk := newEnergyBook(c.nt)
 	return bk.tally(c.nt, c.u).shares(bk)
 }
+
+// sectionMaterials lists the materials that store strain energy in a
+// member of material mt and section sec, in the order of energyBook's
+// parts.
+func sectionMaterials(mt materials.Material, sec sections.Section) []materials.Material {
+	c, ok := sec.(sections.Composite)
+	if !ok {
+		return []materials.Material{mt}
+	}
+	parts, err := c.Parts()
+	if err != nil {
+		return []materials.Material{mt}
+	}
+	var out []materials.Material
+	for _, p := range parts {
+		if !p.Material.MassOnly {
+			out = append(out, p.Material)
+		}
+	}
+	if len(out) == 0 {
+		return []materials.Material{mt}
+	}
+	return out
+}
