@@ -25,6 +25,14 @@ type Contents struct {
 	Cases       []Case
 	Combos      []Combination
 	Dynamics    Dynamics
+	Checks      Checks
+}
+
+// Checks holds the settings of the member checks the file asks for.
+type Checks struct {
+	// Basis picks the automatic effective-length factors of the buckling
+	// check ("design" or "theoretical" in the file).
+	Basis springnet.KBasis
 }
 
 // MaterialDef is a material defined in the [materials] table: a catalogue
@@ -53,6 +61,10 @@ type Member struct {
 	Section  string                // section spec (sections.Parse); "" for raw stiffness
 	Raw      springnet.RawBeam     // raw stiffness when Section is ""; a bar uses EA and LineMass
 	Loss     materials.Range       // loss factor override; zero: the material's
+
+	// EffectiveLength overrides the buckling effective-length factors
+	// about local y and z (bars and beams); 0: automatic.
+	EffectiveLength springnet.EffectiveLength
 
 	// Beams only.
 	Up          springnet.Vec

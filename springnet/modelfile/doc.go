@@ -195,6 +195,13 @@
 //	band = ["2 Hz", "250 Hz"]
 //	modes = 12
 //
+// # Member checks
+//
+//	effective-length = 0.8                # in a [[bar]] or [[beam]]: buckling factor K for both axes, or [ky, kz], or { y = 0.8, z = 1 }
+//
+//	[checks]
+//	effective-length-basis = "design"     # automatic factors: "design" (default) or "theoretical"; see File.MemberSettings
+//
 // # Limits
 //
 // Read refuses a file larger than MaxFileSize (16 MiB) or nested deeper

@@ -125,7 +125,7 @@ func firstInvalid(b []byte) int {
 
 var topKeys = []string{"title", "description", "units", "materials", "sections", "nodes",
 	"bar", "beam", "spring", "foot", "support", "rigid-group", "mount", "mass", "case",
-	"combination", "speed", "response"}
+	"combination", "speed", "response", "checks"}
 
 func (rd *reader) contents(doc map[string]any, md toml.MetaData) *Contents {
 	c := &Contents{}
@@ -170,7 +170,79 @@ func (rd *reader) contents(doc map[string]any, md toml.MetaData) *Contents {
 	rd.masses(top, c)
 	rd.cases(top, order, c)
 	rd.dynamics(top, c)
+	if t, ok := top.sub("checks"); ok {
+		t.path, t.what = "checks", "[checks]"
+		t.allow("effective-length-basis")
+		if b, ok := t.str("effective-length-basis"); ok {
+			switch strings.ToLower(b) {
+			case "design":
+				c.Checks.Basis = springnet.DesignK
+			case "theoretical":
+				c.Checks.Basis = springnet.TheoreticalK
+			default:
+				t.errf("effective-length-basis", "must be \"design\" or \"theoretical\", not %q", b)
+			}
+		}
+	}
 	return c
+}
+
+// effectiveLength reads one factor for both axes, [ky, kz] or { y = , z = }.
+func (t *tab) effectiveLength(key string) (springnet.EffectiveLength, bool) {
+	bad := func() (springnet.EffectiveLength, bool) {
+		t.errf(key, "must be a factor (1.0), two factors [about y, about z] or { y = 0.8, z = 1 }, each positive")
+		return springnet.EffectiveLength{}, false
+	}
+	var k springnet.EffectiveLength
+	switch v := t.m[key].(type) {
+	case []any:
+		if len(v) != 2 {
+			return bad()
+		}
+		y, e1 := t.r.value(v[0], qNone)
+		z, e2 := t.r.value(v[1], qNone)
+		if e1 != nil || e2 != nil {
+			return bad()
+		}
+		k = springnet.EffectiveLength{Y: y, Z: z}
+	case map[string]any:
+		sub := &tab{r: t.r, path: t.path + "." + key, what: t.what + ": " + key, m: v}
+		sub.allow("y", "z")
+		k.Y, _ = sub.num("y", qNone)
+		k.Z, _ = sub.num("z", qNone)
+	default:
+		f, err := t.r.value(v, qNone)
+		if err != nil {
+			return bad()
+		}
+		k = springnet.EffectiveLength{Y: f, Z: f}
+	}
+	if k.Y < 0 || k.Z < 0 || k == (springnet.EffectiveLength{}) {
+		return bad()
+	}
+	return k, true
+}
+
+// MemberSettings returns the member-check settings the file gives: the
+// effective-length basis of [checks] and the factors of members with an
+// "effective-length" (by element handle). It returns nil when the file
+// gives none, which the analyses read as defaults.
+func (f *File) MemberSettings() *springnet.MemberSettings {
+	s := &springnet.MemberSettings{Basis: f.Checks.Basis}
+	// Build adds the members first, in order: member i is element i.
+	for i, m := range f.Members {
+		if m.EffectiveLength == (springnet.EffectiveLength{}) || f.Model == nil || i >= f.Model.NumElements() {
+			continue
+		}
+		if s.K == nil {
+			s.K = map[springnet.ElementID]springnet.EffectiveLength{}
+		}
+		s.K[springnet.ElementID(i)] = m.EffectiveLength
+	}
+	if s.Basis == springnet.DesignK && s.K == nil {
+		return nil
+	}
+	return s
 }
 
 // keyOrder returns, for each table path, its keys in file order.
@@ -330,7 +402,7 @@ func (rd *reader) nodes(top *tab, order map[string][]string, c *Contents) {
 
 var (
 	memberKeys = []string{"name", "ends", "material", "section", "loss-factor",
-		"EA", "EIy", "EIz", "GJ", "GAy", "GAz", "mass-per-length", "area"}
+		"EA", "EIy", "EIz", "GJ", "GAy", "GAz", "mass-per-length", "area", "effective-length"}
 	beamKeys   = []string{"up", "roll", "shear-deformation", "release-start", "release-end", "joint-spring-start", "joint-spring-end"}
 	springKeys = []string{"name", "ends", "axial", "stiffness", "spread", "loss-factor"}
 )
@@ -381,6 +453,9 @@ func (rd *reader) members(top *tab, kind springnet.ElementKind, sections map[str
 				if v, ok := t.num(f.k, f.q); ok {
 					*f.dst = v
 				}
+			}
+			if t.has("effective-length") {
+				m.EffectiveLength, _ = t.effectiveLength("effective-length")
 			}
 			if m.Section != "" && m.Raw != (springnet.RawBeam{}) {
 				t.errf("section", "give either a section or raw stiffness (EA, EIy, ...), not both")

@@ -221,6 +221,11 @@ func TestDemoValues(t *testing.T) {
 	assert.Equal(t, materials.Range{Low: 0.001, Nominal: 0.002, High: 0.004}, beam.Material.Loss)
 	// The mass centre is given in global coordinates; the model holds it
 	// as an offset from the top's centroid (600, 250, 800) mm.
+	// Member checks: theoretical factors, the brace's given as 1.
+	ms := f.MemberSettings()
+	require.NotNil(t, ms)
+	assert.Equal(t, springnet.TheoreticalK, ms.Basis)
+	assert.Equal(t, map[springnet.ElementID]springnet.EffectiveLength{f.ElementIDs["back-brace"]: {Y: 1, Z: 1}}, ms.K)
 	top := f.GroupIDs["top"]
 	assert.Equal(t, springnet.Vec{X: 0.6, Y: 0.25, Z: 0.8}, f.Model.GroupPoint(top))
 }

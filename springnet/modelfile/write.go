@@ -238,6 +238,9 @@ func (wr *writer) contents(c *Contents) {
 			wr.p("harmonics = %d\n", sp.Harmonics)
 		}
 	}
+	if c.Checks.Basis != springnet.DesignK {
+		wr.p("\n[checks]\neffective-length-basis = %s\n", quote(c.Checks.Basis.String()))
+	}
 	if d := c.Dynamics; d.Band != [2]float64{} || d.Modes != 0 {
 		wr.p("\n[response]\n")
 		if d.Band != [2]float64{} {
@@ -375,6 +378,13 @@ func (wr *writer) members(ms []Member) {
 			if f.v != 0 {
 				wr.p("%s = %s\n", f.k, wr.num(f.v, f.q))
 			}
+		}
+	}
+	if k := m.EffectiveLength; k != (springnet.EffectiveLength{}) {
+		if k.Y == k.Z {
+			wr.p("effective-length = %s\n", wr.num(k.Y, qNone))
+		} else {
+			wr.p("effective-length = [%s, %s]\n", wr.num(k.Y, qNone), wr.num(k.Z, qNone))
 		}
 	}
 	if m.Kind == springnet.BeamKind {
