@@ -587,3 +587,23 @@ func TestSingularConsistentMass(t *testing.T) {
 		assert.InEpsilon(t, ref[i], all.Values[i], 1e-6, "mode %d", i)
 	}
 }
+
+// TestAllModes asks for every eigenpair of small problems.
+func TestAllModes(t *testing.T) {
+	rng := rand.New(rand.NewPCG(1, 1))
+	for _, n := range []int{1, 2, 5, 13, 30} {
+		t.Run(fmt.Sprintf("n%d", n), func(t *testing.T) {
+			K, M := chain(n, 3e3, 2, true)
+			res, err := eigen.Lowest(K, M, n, &eigen.Settings{BlockSize: 1 + rng.IntN(3)})
+			require.NoError(t, err)
+			require.Equal(t, n, res.Len())
+			for j := 1; j <= n; j++ {
+				// Fixed-free chain closed form (Meirovitch, see TestChainClosedForm).
+				w := 2 * math.Sqrt(3e3/2.0) * math.Sin(float64(2*j-1)*math.Pi/float64(2*(2*n+1)))
+				assert.InEpsilon(t, w*w, res.Values[j-1], freqTol, "mode %d", j)
+			}
+			assert.True(t, res.Checked)
+			assert.Equal(t, n, res.SturmCount)
+		})
+	}
+}

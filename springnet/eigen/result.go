@@ -76,10 +76,6 @@ func (s *Settings) withDefaults(n, size int) Settings {
 		t.RigidTol = DefaultRigidTol
 	}
 	p := t.BlockSize
-	if p > size {
-		p = size
-		t.BlockSize = p
-	}
 	if t.Basis <= 0 {
 		t.Basis = max(2*n+2*p, n+20, 24)
 	}
@@ -88,8 +84,10 @@ func (s *Settings) withDefaults(n, size int) Settings {
 		t.Basis = (n + 2*p - 1) / p * p
 	}
 	if t.Basis+p > size {
-		// The whole space fits: take all of it.
-		t.Basis = size / p * p
+		// The whole space fits: take all of it, one vector at a time, so
+		// that the process ends with an exhausted (exact) basis.
+		t.BlockSize = 1
+		t.Basis = size
 	}
 	return t
 }
