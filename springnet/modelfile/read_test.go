@@ -2,6 +2,8 @@ package modelfile_test
 
 import (
 	"bytes"
+	"fmt"
+	"math"
 	"os"
 	"path/filepath"
 	"strings"
@@ -327,6 +329,21 @@ name = "push"
 at = "B1"
 force = [1, 0, 0]
 `, 12, `more than one item`},
+		{"after a multi-line text and array", `description = """
+[nodes]
+X = 1
+"""
+[nodes]
+A = [
+  0,
+  0,
+  0,
+]
+B = [0, 0, 1]
+[[bar]]
+ends = ["A", "Q"]
+EA = 1
+`, 12, `names unknown node "Q"`},
 		{"invalid UTF-8", "title = \"a\xffb\"\n", 1, "UTF-8"},
 		{"nesting", "x = " + strings.Repeat("[", 40) + strings.Repeat("]", 40) + "\n", 1, "nesting"},
 		{"gravity word", head + `[[case]]
@@ -386,6 +403,19 @@ func TestLimits(t *testing.T) {
 		require.Error(t, err)
 		assert.Contains(t, err.Error(), "larger than 16 MiB")
 	})
+	t.Run("model too large", func(t *testing.T) {
+		// 80 000 unconnected nodes: n = 480 000 equations, r = 3 nonzeros per
+		// column, nnz(L) ≈ 3·n^1.5 ≈ 1e9, about 12 GB > 8 GiB.
+		var b strings.Builder
+		b.WriteString("[nodes]\n")
+		for i := range 80000 {
+			fmt.Fprintf(&b, "N%d = [%d, 0, 0]\n", i, i)
+		}
+		_, err := modelfile.Read("huge.toml", strings.NewReader(b.String()))
+		require.Error(t, err)
+		assert.Contains(t, err.Error(), "too large to analyse")
+		assert.Contains(t, err.Error(), "480000 equations")
+	})
 	t.Run("dotted key depth", func(t *testing.T) {
 		_, err := modelfile.Read("deep.toml", strings.NewReader(strings.Repeat("a.", 40)+"b = 1\n"))
 		require.Error(t, err)
@@ -410,6 +440,15 @@ func TestLimits(t *testing.T) {
 		// nnz(K) = Σ 36·(1 + degree)/2 = 18·(2 + 3 + 3 + 2) = 180.
 		assert.Equal(t, 180.0, s.NonzerosK)
 	})
+}
+
+func TestWriteRefusesNonFinite(t *testing.T) {
+	c := &modelfile.Contents{Nodes: []modelfile.Node{{Name: "A", At: springnet.Vec{X: math.NaN()}}}}
+	var buf bytes.Buffer
+	err := modelfile.WriteContents(&buf, c)
+	require.Error(t, err)
+	assert.Contains(t, err.Error(), "NaN or infinite")
+	assert.Zero(t, buf.Len(), "nothing is written")
 }
 
 func TestUnitsPerValue(t *testing.T) {
@@ -448,4 +487,23 @@ fix = ["y", "z", "rx", "ry"]
 	// 1 lbf/in = 4.4482216152605 N / 0.0254 m = 175.126835... N/m (NIST SP 811 factors).
 	assert.InEpsilon(t, 10*4.4482216152605/0.0254, shoe.K.X, 1e-14)
 	assert.Equal(t, springnet.UY|springnet.UZ|springnet.RX|springnet.RY, f.Model.Fixed(b))
+}
+
+// BenchmarkRead reads a generated 20 × 20-leg frame with three stretcher
+// levels (2000 nodes, about 4600 members).
+func BenchmarkRead(b *testing.B) {
+	f, err := modelfile.Generate(modelfile.Layout{LegsX: 20, LegsY: 20, Width: 10, Depth: 10, Height: 1,
+		Material: "steel S235", Section: "square-tube 50x3 mm", Stretchers: []float64{0.2, 0.4, 0.6},
+		Feet: springnet.Stiffness6{X: 1e6, Y: 1e6, Z: 1e7}})
+	require.NoError(b, err)
+	var buf bytes.Buffer
+	require.NoError(b, modelfile.Write(&buf, f))
+	text := buf.Bytes()
+	b.SetBytes(int64(len(text)))
+	b.ReportAllocs()
+	for b.Loop() {
+		if _, err := modelfile.Read("big.toml", bytes.NewReader(text)); err != nil {
+			b.Fatal(err)
+		}
+	}
 }

@@ -1,10 +1,11 @@
 package modelfile
 
 import (
-	"bufio"
+	"bytes"
 	"errors"
 	"fmt"
 	"io"
+	"math"
 	"strconv"
 	"strings"
 
@@ -31,24 +32,33 @@ func WriteContents(w io.Writer, c *Contents) error {
 	if len(errs) > 0 {
 		return fmt.Errorf("modelfile: Write: %w", errors.Join(errs...))
 	}
-	bw := bufio.NewWriter(w)
-	wr := &writer{w: bw, sc: sc}
+	// Render first, so that nothing is written when a value is bad.
+	var buf bytes.Buffer
+	wr := &writer{w: &buf, sc: sc}
 	wr.contents(c)
-	if err := bw.Flush(); err != nil {
+	if wr.bad > 0 {
+		return fmt.Errorf("modelfile: Write: %d values are NaN or infinite; a model file holds finite numbers only", wr.bad)
+	}
+	if _, err := w.Write(buf.Bytes()); err != nil {
 		return fmt.Errorf("modelfile: Write: %w", err)
 	}
 	return nil
 }
 
 type writer struct {
-	w  *bufio.Writer
-	sc [numQuantities]scale
+	w   *bytes.Buffer
+	sc  [numQuantities]scale
+	bad int // non-finite values met
 }
 
 func (wr *writer) p(format string, args ...any) { fmt.Fprintf(wr.w, format, args...) }
 
 // num formats an SI value in the file's unit for q.
 func (wr *writer) num(v float64, q quantity) string {
+	if math.IsNaN(v) || math.IsInf(v, 0) {
+		wr.bad++
+		return "nan"
+	}
 	if s, ok := formatIn(v, wr.sc[q]); ok {
 		return s
 	}
