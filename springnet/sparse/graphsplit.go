@@ -1,11 +1,11 @@
 package sparse
 
-import "slices"
+import (
+	"slices"
+)
 
-// graphSplit bisects the subgraph induced by verts using a breadth-first
-// level structure from a pseudo-peripheral vertex (George and Liu 1981,
-// ch. 8): the vertices before the level that halves the subgraph go
-// left, the rest right; separate then extracts a vertex separator. A
+// graphSplit bisects the subgraph induced by verts by multilevel edge
+// bisection (bisect); separate then extracts a vertex separator. A
 // disconnected subgraph is split between its components without a
 // separator. It returns nil parts if no split is found.
 func (st *nested) graphSplit(verts []int) (left, right, sep []int) {
@@ -13,8 +13,7 @@ func (st *nested) graphSplit(verts []int) (left, right, sep []int) {
 		st.side[v] = 4 // member, unvisited
 	}
 	// Connected component of verts[0].
-	start := st.peripheral(verts[0])
-	levels := st.bfs(start) // visited vertices, level by level in st.queue
+	st.bfs(verts[0])
 	nvis := len(st.queue)
 	if nvis < len(verts) {
 		// Disconnected: split between components, no separator. Collect
@@ -33,33 +32,30 @@ func (st *nested) graphSplit(verts []int) (left, right, sep []int) {
 		}
 		return left, right, []int{}
 	}
-	// The level boundary closest to half.
-	half := len(verts) / 2
-	cut := 0
-	for _, e := range levels {
-		if e <= half || cut == 0 {
-			cut = e
+	// Connected: multilevel bisection of the induced subgraph.
+	for _, v := range verts {
+		st.side[v] = 0
+	}
+	part := bisect(st.induced(verts), st.rng)
+	n0 := 0
+	for i, v := range verts {
+		st.side[v] = int8(part[i]) + 1
+		if part[i] == 0 {
+			n0++
 		}
 	}
-	if cut == 0 || cut >= nvis {
+	if n0 == 0 || n0 == len(verts) {
 		for _, v := range verts {
 			st.side[v] = 0
 		}
 		return nil, nil, nil
-	}
-	for i, v := range st.queue {
-		if i < cut {
-			st.side[v] = 1
-		} else {
-			st.side[v] = 2
-		}
 	}
 	return st.separate(verts)
 }
 
 // bfs runs a breadth-first search from s over vertices marked 4 in
 // st.side, leaving the visit order in st.queue; it returns the end
-// position in st.queue of each level. Visited vertices are re-marked 4.
+// position in st.queue of each level.
 func (st *nested) bfs(s int) []int {
 	st.stamp++
 	st.queue = append(st.queue[:0], s)
@@ -79,34 +75,6 @@ func (st *nested) bfs(s int) []int {
 		ends = append(ends, end)
 	}
 	return ends
-}
-
-// peripheral returns a pseudo-peripheral vertex of s's component (Gibbs,
-// Poole and Stockmeyer's iteration: restart from a vertex of the last
-// level while the eccentricity grows).
-func (st *nested) peripheral(s int) int {
-	ecc := -1
-	for it := 0; it < 8; it++ {
-		ends := st.bfs(s)
-		if len(ends)-1 <= ecc {
-			break
-		}
-		ecc = len(ends) - 1
-		// A vertex of minimum degree in the last level.
-		last := st.queue[ends[len(ends)-2]:]
-		if len(ends) == 1 {
-			last = st.queue
-		}
-		best, bd := last[0], -1
-		for _, v := range last {
-			d := st.g.ptr[v+1] - st.g.ptr[v]
-			if bd < 0 || d < bd {
-				best, bd = v, d
-			}
-		}
-		s = best
-	}
-	return s
 }
 
 // components returns the connected components of the subgraph induced

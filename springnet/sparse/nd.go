@@ -2,6 +2,7 @@ package sparse
 
 import (
 	"cmp"
+	"math/rand/v2"
 	"slices"
 )
 
@@ -19,12 +20,13 @@ type nested struct {
 	mark   []int        // scratch for traversals
 	stamp  int
 	queue  []int
+	rng    *rand.Rand
 }
 
 // ndOrder returns a nested dissection ordering of g. With coordinates,
 // each subgraph is split at the median of its longest extent
 // (recursive coordinate bisection); otherwise by a multilevel graph
-// bisection. The vertex separator is ordered after both halves, and each
+// bisection (bisect). The vertex separator is ordered after both halves, and each
 // small enough part by approximate minimum degree.
 func ndOrder(g graph, coords [][3]float64) []int {
 	st := &nested{g: g, coords: coords,
@@ -32,6 +34,7 @@ func ndOrder(g graph, coords [][3]float64) []int {
 		loc:  make([]int, g.n),
 		side: make([]int8, g.n),
 		mark: make([]int, g.n),
+		rng:  rand.New(rand.NewPCG(1, 1)),
 	}
 	for i := range st.loc {
 		st.loc[i] = -1
@@ -140,38 +143,113 @@ func (st *nested) coordSplit(verts []int) (left, right, sep []int) {
 }
 
 // separate turns the two-way partition in st.side (1 and 2) of verts into
-// left, right and a vertex separator: the smaller of the two sets of
-// boundary vertices. It clears st.side.
+// left, right and a vertex separator: a minimum vertex cover of the cut
+// edges, from a maximum matching of the bipartite cut graph (König's
+// theorem). It clears st.side.
 func (st *nested) separate(verts []int) (left, right, sep []int) {
-	var b1, b2 int
+	g := st.g
+	// Boundary vertices of each side, numbered locally.
+	var bl, br []int
 	for _, v := range verts {
 		s := st.side[v]
-		for _, w := range st.g.adj[st.g.ptr[v]:st.g.ptr[v+1]] {
+		for _, w := range g.adj[g.ptr[v]:g.ptr[v+1]] {
 			if t := st.side[w]; t != 0 && t != s {
 				if s == 1 {
-					b1++
+					st.loc[v] = len(bl)
+					bl = append(bl, v)
 				} else {
-					b2++
+					st.loc[v] = len(br)
+					br = append(br, v)
 				}
 				break
 			}
 		}
 	}
-	sepSide := int8(1)
-	if b2 < b1 {
-		sepSide = 2
+	// Maximum matching by augmenting paths from each left vertex.
+	ml := make([]int, len(bl)) // match of left i (index in br), or -1
+	mr := make([]int, len(br))
+	for i := range ml {
+		ml[i] = -1
 	}
-	for _, v := range verts {
-		s := st.side[v]
-		if s == sepSide {
-			for _, w := range st.g.adj[st.g.ptr[v]:st.g.ptr[v+1]] {
-				if t := st.side[w]; t != 0 && t != s && t != 3 {
-					s = 3
-					break
-				}
+	for i := range mr {
+		mr[i] = -1
+	}
+	visited := make([]int, len(br))
+	stamp := 0
+	var augment func(i int) bool
+	augment = func(i int) bool {
+		v := bl[i]
+		for _, w := range g.adj[g.ptr[v]:g.ptr[v+1]] {
+			if st.side[w] != 2 || st.loc[w] < 0 {
+				continue
+			}
+			j := st.loc[w]
+			if visited[j] == stamp {
+				continue
+			}
+			visited[j] = stamp
+			if mr[j] < 0 || augment(mr[j]) {
+				ml[i], mr[j] = j, i
+				return true
 			}
 		}
-		switch s {
+		return false
+	}
+	// Greedy start, then augmenting paths.
+	for i, v := range bl {
+		for _, w := range g.adj[g.ptr[v]:g.ptr[v+1]] {
+			if st.side[w] == 2 && st.loc[w] >= 0 && mr[st.loc[w]] < 0 {
+				ml[i], mr[st.loc[w]] = st.loc[w], i
+				break
+			}
+		}
+	}
+	for i := range bl {
+		if ml[i] < 0 {
+			stamp++
+			augment(i)
+		}
+	}
+	// König: Z = vertices reachable from unmatched left vertices along
+	// alternating paths; cover = (left boundary \ Z) ∪ (right boundary ∩ Z).
+	zl := make([]bool, len(bl))
+	zr := make([]bool, len(br))
+	queue := make([]int, 0, len(bl))
+	for i := range bl {
+		if ml[i] < 0 {
+			zl[i] = true
+			queue = append(queue, i)
+		}
+	}
+	for h := 0; h < len(queue); h++ {
+		v := bl[queue[h]]
+		for _, w := range g.adj[g.ptr[v]:g.ptr[v+1]] {
+			if st.side[w] != 2 || st.loc[w] < 0 {
+				continue
+			}
+			j := st.loc[w]
+			if zr[j] {
+				continue
+			}
+			zr[j] = true
+			if i := mr[j]; i >= 0 && !zl[i] {
+				zl[i] = true
+				queue = append(queue, i)
+			}
+		}
+	}
+	for i, v := range bl {
+		if !zl[i] {
+			st.side[v] = 3
+		}
+	}
+	for j, v := range br {
+		if zr[j] {
+			st.side[v] = 3
+		}
+	}
+	for _, v := range verts {
+		switch st.side[v] {
 		case 1:
 			left = append(left, v)
 		case 2:
@@ -179,6 +257,12 @@ func (st *nested) separate(verts []int) (left, right, sep []int) {
 		default:
 			sep = append(sep, v)
 		}
+	}
+	for _, v := range bl {
+		st.loc[v] = -1
+	}
+	for _, v := range br {
+		st.loc[v] = -1
 	}
 	for _, v := range verts {
 		st.side[v] = 0
