@@ -10,6 +10,7 @@ import (
 	"github.com/stretchr/testify/require"
 	"gonum.org/v1/gonum/mat"
 
+	"github.com/trestle-go/trestle/materials"
 	"github.com/trestle-go/trestle/sections"
 	"github.com/trestle-go/trestle/springnet"
 	"github.com/trestle-go/trestle/springnet/element"
@@ -429,4 +430,40 @@ func TestBucklingStubbyTimoshenkoColumn(t *testing.T) {
 	require.NoError(t, err)
 	want := pe / (1 + pe/kga) / 1e6
 	assert.InEpsilon(t, want, res.Factor(0), eulerTol)
+}
+
+func TestBucklingLevelsAndCombinations(t *testing.T) {
+	// Linear buckling is linear in the load and in E: λ ∝ E at a fixed
+	// load, and a combination of proportional cases divides λ by the
+	// total factor (the eigenproblem (K + λ·Kg)·φ = 0 with Kg linear in
+	// the axial forces; Timoshenko & Gere, Theory of Elastic Stability).
+	const l = 1.0
+	steel := beamSteel()
+	steel.E = materials.Range{Low: 190e9, Nominal: 200e9, High: 210e9}
+	var m springnet.Model
+	prev := m.AddNode("base", springnet.Vec{})
+	m.Fix(prev, springnet.AllDOF)
+	for i := 1; i <= 8; i++ {
+		n := m.AddNode("", springnet.Vec{Z: l * float64(i) / 8})
+		m.AddBeam(prev, n, springnet.Beam{Material: steel, Section: sections.Round{D: 0.02}})
+		prev = n
+	}
+	c1 := m.AddLoadCase("machine")
+	c2 := m.AddLoadCase("tooling")
+	m.AddCaseLoad(c1, prev, springnet.Load{FZ: -1e3})
+	m.AddCaseLoad(c2, prev, springnet.Load{FZ: -2e3})
+	comb := m.AddCombination("both", springnet.Term{Case: c1, Factor: 1.2}, springnet.Term{Case: c2, Factor: 1.5})
+	factor := func(c springnet.CaseID, lv materials.Level) float64 {
+		res, err := springnet.Buckling(&m, c, &springnet.BucklingSettings{Modes: 1, Level: lv})
+		require.NoError(t, err)
+		assert.Equal(t, lv, res.Level())
+		return res.Factor(0)
+	}
+	nom := factor(c1, materials.Nominal)
+	// Linearity holds to the Lanczos tolerance (1e-10) and round-off.
+	const linTol = 1e-8
+	assert.InEpsilon(t, nom*190/200, factor(c1, materials.Low), linTol)
+	assert.InEpsilon(t, nom*210/200, factor(c1, materials.High), linTol)
+	assert.InEpsilon(t, nom/2, factor(c2, materials.Nominal), linTol)
+	assert.InEpsilon(t, nom/(1.2+1.5*2), factor(comb, materials.Nominal), linTol)
 }

@@ -446,3 +446,25 @@ func TestMemberEulerCheckAngle(t *testing.T) {
 	assert.InEpsilon(t, math.Pi*math.Pi*e*imin/(4*l*l), mr.Buckling.Pcr, 1e-9)
 	assert.NotEmpty(t, mr.Buckling.Note)
 }
+
+func TestMembersTo(t *testing.T) {
+	// The bulk query returns every bar and beam, in element order, the
+	// same as the single query; a bad override is an error.
+	m, _ := table(0.8, 1.2, 0.6, 3e4, 6e4, 2e7, false, true, 1e3)
+	m.AddFoot(springnet.NodeID(0), springnet.Foot{K: springnet.Stiffness6{Z: 1e6}})
+	res, err := springnet.Static(m, nil)
+	require.NoError(t, err)
+	cr := res.Case(springnet.DefaultCase)
+	all, err := cr.MembersTo(nil, nil)
+	require.NoError(t, err)
+	assert.Len(t, all, m.NumElements()-1, "every element but the foot")
+	for _, mr := range all {
+		one, err := cr.MemberForces(mr.Element)
+		require.NoError(t, err)
+		assert.Equal(t, one.A, mr.A)
+		assert.Equal(t, one.Buckling, mr.Buckling)
+	}
+	_, err = cr.MembersTo(all, &springnet.MemberSettings{K: map[springnet.ElementID]springnet.EffectiveLength{
+		springnet.ElementID(m.NumElements() - 1): {Y: 1}}})
+	assert.ErrorContains(t, err, "not a bar or beam")
+}
