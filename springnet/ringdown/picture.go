@@ -62,6 +62,7 @@ type picture struct {
 // picture collects the drawing data from the reduction.
 func (r *reduction) picture(sf sineFit, nom *MethodEstimate) picture {
 	n := len(r.y)
+	back := r.scale // to the record's unit
 	pic := picture{unit: r.rec.Unit, f0: r.f0, halfPts: r.halfPts, band: r.cfg.band}
 	bins := min(traceBins, n)
 	for b := range bins {
@@ -81,15 +82,15 @@ func (r *reduction) picture(sf sineFit, nom *MethodEstimate) picture {
 		if ih < il {
 			first, second = ih, il
 		}
-		pic.trace = append(pic.trace, plotter.XY{X: r.rec.Time(first), Y: r.y[first]}, plotter.XY{X: r.rec.Time(second), Y: r.y[second]})
-		pic.env = append(pic.env, plotter.XY{X: r.rec.Time((a + e) / 2), Y: em})
+		pic.trace = append(pic.trace, plotter.XY{X: r.rec.Time(first), Y: back * r.y[first]}, plotter.XY{X: r.rec.Time(second), Y: back * r.y[second]})
+		pic.env = append(pic.env, plotter.XY{X: r.rec.Time((a + e) / 2), Y: back * em})
 	}
 	t0 := r.rec.Time(r.win[0])
 	pic.winX = [2]float64{t0, r.rec.Time(r.win[1])}
-	amp, sig := sf.amplitude(), sf.p[2]
+	amp, sig := back*sf.amplitude(), sf.p[2]
 	if nom.Method != MethodSineFit {
 		// Envelope through the window start from the nominal method's decay.
-		amp = r.env[r.win[0]]
+		amp = back * r.env[r.win[0]]
 		sig = 2 * math.Pi * nom.DampedFrequency.Value * nom.Ratio.Value / math.Sqrt(1-nom.Ratio.Value*nom.Ratio.Value)
 	}
 	tEnd := r.rec.Time(n - 1)

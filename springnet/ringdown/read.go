@@ -158,11 +158,23 @@ func readLines(r io.Reader, name string) ([]line, error) {
 }
 
 // detectSeparator picks tab, semicolon or comma, in that order of
-// preference, from the first lines; 0 means runs of white space.
+// preference, from the first 50 lines that start like a number (so that a
+// preamble line does not decide); 0 means runs of white space.
 func detectSeparator(lines []line) rune {
-	n := min(len(lines), 50)
+	var sample []line
+	for _, l := range lines {
+		if c := l.raw()[0]; c >= '0' && c <= '9' || c == '-' || c == '+' || c == '.' {
+			sample = append(sample, l)
+			if len(sample) == 50 {
+				break
+			}
+		}
+	}
+	if len(sample) == 0 {
+		sample = lines[:min(len(lines), 50)]
+	}
 	for _, sep := range []string{"\t", ";", ","} {
-		for _, l := range lines[:n] {
+		for _, l := range sample {
 			if strings.Contains(l.raw(), sep) {
 				return rune(sep[0])
 			}
@@ -281,24 +293,39 @@ func isUnitsLine(fields []string) bool {
 		if strings.HasPrefix(f, "[") || strings.HasPrefix(f, "(") {
 			continue
 		}
-		if _, ok := knownUnits[normUnit(f)]; !ok {
+		if _, known, _ := unitScale(normUnit(f)); !known {
 			return false
 		}
 	}
 	return seen
 }
 
-// knownUnits maps a normalised unit to its size in SI: seconds for time,
-// m/s² for acceleration; 0 for units kept as they are.
-var knownUnits = map[string]float64{
-	"s": 1, "sec": 1, "ms": 1e-3, "us": 1e-6, "ns": 1e-9,
-	"g": StandardGravity, "mg": 1e-3 * StandardGravity,
-	"m/s²": 1, "mm/s²": 1e-3,
-	"v": 0, "mv": 0, "-": 0, "m": 0, "mm": 0, "m/s": 0, "mm/s": 0, "um": 0,
+// unitScale returns the size of a normalised unit in SI — seconds for
+// time, m/s² for acceleration, 0 for units kept as they are — whether the
+// unit is known, and whether it measures time.
+func unitScale(u string) (scale float64, known, isTime bool) {
+	switch u {
+	case "s", "sec":
+		return 1, true, true
+	case "ms":
+		return 1e-3, true, true
+	case "us":
+		return 1e-6, true, true
+	case "ns":
+		return 1e-9, true, true
+	case "g":
+		return StandardGravity, true, false
+	case "mg":
+		return 1e-3 * StandardGravity, true, false
+	case "m/s²":
+		return 1, true, false
+	case "mm/s²":
+		return 1e-3, true, false
+	case "v", "mv", "-", "m", "mm", "m/s", "mm/s", "um":
+		return 0, true, false
+	}
+	return 0, false, false
 }
-
-// timeUnits are the members of knownUnits that measure time.
-var timeUnits = map[string]bool{"s": true, "sec": true, "ms": true, "us": true, "ns": true}
 
 // normUnit normalises a unit: brackets stripped, lower case, µ → u,
 // m/s^2 and its spellings → m/s².
@@ -417,14 +444,10 @@ func (rd *reader) read(data []line) (Record, error) {
 	return rec, nil
 }
 
-// timeNames are header names taken for the time column.
-var timeNames = []string{"t", "time", "timestamp", "times", "seconds", "sec", "s", "ms", "millis", "elapsed", "clock"}
-
 // findTime returns the time column: one named like time, else the first.
 func (rd *reader) findTime() int {
 	for i, c := range rd.cols {
-		n := strings.ToLower(c.name)
-		if slices.Contains(timeNames, n) || strings.Contains(n, "time") {
+		if isTimeName(c.name) {
 			return i
 		}
 	}
@@ -502,15 +525,24 @@ func (rd *reader) signalColumns(timeCol int) ([]int, error) {
 		return []int{c}, nil
 	}
 	if len(free) == 0 {
+		if !rd.hasHeader {
+			return nil, fmt.Errorf("ringdown: %s: one column only: give the sample rate (the column is then the signal) or add a time column", rd.name)
+		}
 		return nil, fmt.Errorf("ringdown: %s: no signal column: the only column is time", rd.name)
 	}
 	return free, nil
 }
 
-// isTimeName reports whether a header name means time.
+// isTimeName reports whether a header name means time: t, time,
+// timestamp, seconds, sec, s, ms, millis, elapsed, clock, or any name
+// containing "time".
 func isTimeName(n string) bool {
 	n = strings.ToLower(n)
-	return slices.Contains(timeNames, n) || strings.Contains(n, "time")
+	switch n {
+	case "t", "seconds", "sec", "s", "ms", "millis", "elapsed", "clock":
+		return true
+	}
+	return strings.Contains(n, "time")
 }
 
 // signal builds the signal from the parsed columns: the magnitude of three
@@ -575,7 +607,7 @@ func (rd *reader) signalUnit(cols []int, sig []float64) (unit, desc string) {
 		c = cols[0]
 	}
 	u := rd.cols[c].unit
-	if f, ok := knownUnits[u]; ok && f != 0 && f != 1 && !timeUnits[u] {
+	if f, _, isTime := unitScale(u); f != 0 && f != 1 && !isTime {
 		for i := range sig {
 			sig[i] *= f
 		}
@@ -659,8 +691,8 @@ func (rd *reader) timeScale(col int, medStep float64) (float64, error) {
 			u = "ms"
 		}
 	}
-	if timeUnits[u] {
-		return knownUnits[u], nil
+	if f, _, isTime := unitScale(u); isTime {
+		return f, nil
 	}
 	if u != "" {
 		return 0, fmt.Errorf("ringdown: %s: time column %q has unit %q; give the time unit", rd.name, rd.cols[col].name, u)

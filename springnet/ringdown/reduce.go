@@ -153,7 +153,8 @@ type reduction struct {
 	fs   float64
 	warn []string
 
-	x       []float64  // detrended record
+	scale   float64    // largest |sample|: the record is divided by it
+	x       []float64  // detrended record, divided by scale
 	y, h    []float64  // isolated signal and its Hilbert transform
 	env     []float64  // analytic-signal envelope |y + i h|
 	es      []float64  // env smoothed over one period
@@ -174,7 +175,21 @@ func (r *reduction) addWarn(format string, a ...any) {
 
 func (r *reduction) run() (Result, error) {
 	n := len(r.rec.Samples)
-	r.x = detrend(r.rec.Samples)
+	// Work on the record divided by its largest magnitude, so that squares
+	// neither overflow nor underflow whatever the unit; amplitudes are
+	// scaled back only for the picture.
+	r.scale = 0
+	for _, v := range r.rec.Samples {
+		r.scale = math.Max(r.scale, math.Abs(v))
+	}
+	if r.scale == 0 {
+		return Result{}, fmt.Errorf("ringdown: the record is constant (after removing the mean and trend)")
+	}
+	scaled := make([]float64, n)
+	for i, v := range r.rec.Samples {
+		scaled[i] = v / r.scale
+	}
+	r.x = detrend(scaled)
 	r.strike = 0
 	for i, v := range r.x {
 		if math.Abs(v) > math.Abs(r.x[r.strike]) {
@@ -184,7 +199,7 @@ func (r *reduction) run() (Result, error) {
 	if r.x[r.strike] == 0 {
 		return Result{}, fmt.Errorf("ringdown: the record is constant (after removing the mean and trend)")
 	}
-	r.clipped, r.clipEnd = detectClipping(r.rec.Samples)
+	r.clipped, r.clipEnd = detectClipping(scaled)
 	if err := r.findMode(); err != nil {
 		return Result{}, err
 	}
@@ -365,6 +380,9 @@ func (r *reduction) chooseWindow() error {
 				r.cfg.Window.Start, r.cfg.Window.End, r.f0, r.rec.Start, r.rec.Time(n-1))
 		}
 		r.win = [2]int{s, e}
+		if r.clipEnd >= s {
+			r.addWarn("%d clipped samples, the last at %.4g s, inside the given fit window", r.clipped, r.rec.Time(r.clipEnd))
+		}
 		return nil
 	}
 	peak := 0
