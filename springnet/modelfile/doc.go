@@ -60,6 +60,7 @@
 //
 //	[materials."frame steel"]
 //	from = "steel S235"                  # catalogue entry to start from
+//	family = "steel"                     # for grouping and drawing: steel, timber, concrete, masonry, stone, ...
 //	E = ["195 GPa", "205 GPa", "212 GPa"] # a range [low, nominal, high], or one value
 //	G = "79 GPa"                          # shear modulus; default E/(2(1+poisson))
 //	poisson = 0.3

@@ -313,7 +313,17 @@ func (rd *reader) sections(top *tab) map[string]string {
 	return out
 }
 
-var materialKeys = []string{"from", "E", "G", "poisson", "density", "strength", "compressive-strength", "loss-factor", "mass-only"}
+var materialKeys = []string{"from", "family", "E", "G", "poisson", "density", "strength", "compressive-strength", "loss-factor", "mass-only"}
+
+// families lists the material families by their names ("steel",
+// "timber", ...), for the "family" key.
+func families() map[string]materials.Kind {
+	out := map[string]materials.Kind{}
+	for k := materials.Other; k <= materials.Fill; k++ {
+		out[k.String()] = k
+	}
+	return out
+}
 
 func (rd *reader) materials(top *tab, order map[string][]string, c *Contents) {
 	mt, ok := top.sub("materials")
@@ -364,6 +374,19 @@ func (rd *reader) materials(top *tab, order map[string][]string, c *Contents) {
 		}
 		if b, ok := sub.boolean("mass-only"); ok {
 			m.MassOnly = b
+		}
+		if fam, ok := sub.str("family"); ok {
+			fams := families()
+			if k, ok := fams[strings.ToLower(fam)]; ok {
+				m.Kind = k
+			} else {
+				var names []string
+				for n := range fams {
+					names = append(names, n)
+				}
+				sort.Strings(names)
+				sub.errf("family", "unknown family %q%s (families: %s)", fam, suggest(fam, names), strings.Join(names, ", "))
+			}
 		}
 		if len(sub.m) > 1 || def.From == "" {
 			m.Name = name

@@ -273,7 +273,11 @@ func (wr *writer) material(d MaterialDef) {
 	n := 0
 	line := func(k, v string) { wr.p("%s = %s\n", k, v); n++ }
 	differs := m.E != base.E || m.G != base.G || m.Poisson != base.Poisson || m.Density != base.Density ||
-		m.Yield != base.Yield || m.Compress != base.Compress || m.Loss != base.Loss || m.MassOnly != base.MassOnly
+		m.Yield != base.Yield || m.Compress != base.Compress || m.Loss != base.Loss || m.MassOnly != base.MassOnly ||
+		m.Kind != base.Kind
+	if m.Kind != base.Kind {
+		line("family", quote(m.Kind.String()))
+	}
 	if m.E != base.E {
 		line("E", wr.rng(m.E, qStress))
 	}
