@@ -245,29 +245,53 @@ type energyTally struct {
 
 // tally computes the energies of u.
 func (bk *energyBook) tally(nt *net, u []float64) *energyTally {
-	t := &energyTally{elem: make([]float64, len(nt.m.elems)), group: make([]float64, len(bk.names)),
-		groupLoss: make([][3]float64, len(bk.names))}
+	return bk.tallyAll(nt, [][]float64{u})[0]
+}
+
+// tallyAll computes the energies of each vector of us, forming each
+// element's stiffness once.
+func (bk *energyBook) tallyAll(nt *net, us [][]float64) []*energyTally {
+	out := make([]*energyTally, len(us))
+	for v := range us {
+		out[v] = &energyTally{elem: make([]float64, len(nt.m.elems)), group: make([]float64, len(bk.names)),
+			groupLoss: make([][3]float64, len(bk.names))}
+	}
+	var k [12][12]float64
+	var dofs [12]edof
 	var x [12]float64
 	var w []float64
 	for i := range nt.m.elems {
-		ue := nt.elemEnergy(i, u, &x)
-		t.elem[i] = ue
-		t.total += ue
-		if ue == 0 {
-			continue
-		}
-		w = bk.split(nt, i, &x, w)
-		for j, p := range bk.parts[i] {
-			up := ue * w[j]
-			t.group[p.group] += up
-			for l, lv := range materials.Levels {
-				eta := p.loss.At(lv) * up
-				t.groupLoss[p.group][l] += eta
-				t.lossSum[l] += eta
+		nd := nt.elemStiffness(i, &k, &dofs)
+		for v, u := range us {
+			t := out[v]
+			nt.elemValues(&dofs, nd, u, &x)
+			ue := 0.0
+			for a := 0; a < nd; a++ {
+				r := 0.0
+				for b := 0; b < nd; b++ {
+					r += k[a][b] * x[b]
+				}
+				ue += x[a] * r
+			}
+			ue /= 2
+			t.elem[i] = ue
+			t.total += ue
+			if ue == 0 {
+				continue
+			}
+			w = bk.split(nt, i, &x, w)
+			for j, p := range bk.parts[i] {
+				up := ue * w[j]
+				t.group[p.group] += up
+				for l, lv := range materials.Levels {
+					eta := p.loss.At(lv) * up
+					t.groupLoss[p.group][l] += eta
+					t.lossSum[l] += eta
+				}
 			}
 		}
 	}
-	return t
+	return out
 }
 
 // lossRange returns the energy-weighted loss factor η = Σ ηᵢUᵢ / Σ Uᵢ at

@@ -192,14 +192,13 @@ func Modes(m *Model, s *ModeSettings) (*ModeResult, error) {
 	}
 	r.participation()
 	r.book = newEnergyBook(nt)
-	for i, v := range r.vecs {
+	r.tally = r.book.tallyAll(nt, r.vecs)
+	for i := range r.vecs {
 		if r.rigid[i] {
 			// A rigid-body mode strains nothing; its energy is round-off.
-			r.tally = append(r.tally, &energyTally{elem: make([]float64, len(m.elems)),
-				group: make([]float64, len(r.book.names)), groupLoss: make([][3]float64, len(r.book.names))})
-			continue
+			r.tally[i] = &energyTally{elem: make([]float64, len(m.elems)),
+				group: make([]float64, len(r.book.names)), groupLoss: make([][3]float64, len(r.book.names))}
 		}
-		r.tally = append(r.tally, r.book.tally(nt, v))
 	}
 	if few != nil {
 		return r, few
