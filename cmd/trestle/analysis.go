@@ -18,9 +18,7 @@ var cautions = []string{
 
 // pendingStatic names the analyses that springnet does not offer yet in
 // this build; the report says so instead of leaving them out silently.
-var pendingAnalyses = []string{
-	"natural frequencies and modal damping (springnet modes: not in this build yet)",
-}
+var pendingAnalyses = []string{}
 
 // elementLabel is the name of element e, or "<kind> #<i>" when it has none.
 func elementLabel(m *springnet.Model, e springnet.ElementID) string {
@@ -50,6 +48,7 @@ func mountPlaces(m *springnet.Model) []springnet.Place {
 type analysed struct {
 	model  *springnet.Model
 	static *springnet.StaticResult
+	modes  *springnet.ModeResult // nil when the modal analysis failed
 	report *AnalysisReport
 }
 
@@ -71,7 +70,7 @@ func explain(name string, err error) error {
 // analyse runs the static analysis and the mount stiffness of m at level l
 // and builds the report. Suspect solves (a *springnet.ConditionError) are
 // kept and reported as warnings.
-func analyse(m *springnet.Model, name string, l materials.Level) (*analysed, error) {
+func analyse(m *springnet.Model, name string, l materials.Level, dyn dynamics) (*analysed, error) {
 	var s springnet.Solver
 	st := &springnet.StaticSettings{Level: l}
 	rep := &AnalysisReport{Schema: schemaAnalysis, Model: name, Level: l.String(),
@@ -100,9 +99,11 @@ func analyse(m *springnet.Model, name string, l materials.Level) (*analysed, err
 		rep.Cases = append(rep.Cases, caseReport(m, res.Case(springnet.CaseID(c))))
 	}
 	rep.Buckling, rep.Warnings = buckling(m, l, rep.Warnings)
+	a := &analysed{model: m, static: res, report: rep}
+	a.modes, rep.Modes, rep.Warnings = modes(m, l, dyn, rep.Warnings)
 	rep.Governing = governing(rep)
 	rep.Warnings = append(rep.Warnings, alerts(rep)...)
-	return &analysed{model: m, static: res, report: rep}, nil
+	return a, nil
 }
 
 func summarise(m *springnet.Model, res *springnet.StaticResult) ModelSummary {
@@ -342,9 +343,14 @@ func governing(rep *AnalysisReport) Governing {
 			g.TippingFactor, g.TippingCase = &f, c.Name
 		}
 	}
-	if rep.Modes != nil && len(rep.Modes.Modes) > 0 {
-		f := rep.Modes.Modes[0].FrequencyHz
-		g.FirstFrequencyHz = &f
+	if rep.Modes != nil {
+		for _, md := range rep.Modes.Modes {
+			if !md.RigidBody {
+				f := md.FrequencyHz
+				g.FirstFrequencyHz = &f
+				break
+			}
+		}
 	}
 	for _, b := range rep.Buckling {
 		if len(b.Factors) > 0 && (g.BucklingFactor == nil || b.Factors[0] < *g.BucklingFactor) {

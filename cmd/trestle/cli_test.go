@@ -74,7 +74,9 @@ func TestErrors(t *testing.T) {
 		{"generate bad legs", "", []string{"generate", "--legs", "two", "--width", "1m", "--depth", "1m", "--height", "1m", "--section", "square 40 mm"}, []string{"--legs"}},
 		{"generate bad unit", "", []string{"generate", "--width", "3 parsecs", "--depth", "1m", "--height", "1m", "--section", "square 40 mm"}, []string{"unknown unit"}},
 		{"export without dir", "", []string{"export", "demo"}, []string{"--dir"}},
-		{"modes not yet", "", []string{"modes", "demo"}, []string{"modal analysis"}},
+		{"modes bad count", "", []string{"modes", "--count", "-2", "demo"}, []string{"--count -2"}},
+		{"modes mode out of range", "", []string{"modes", "--mode", "40", "--picture", filepath.Join(t.TempDir(), "m.svg"), "testdata/four-legs.toml"}, []string{"--mode 40", "modes 1 to 3"}},
+		{"response bad band", "", []string{"response", "--band", "5", "demo"}, []string{"--band"}},
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
@@ -289,9 +291,11 @@ func TestExport(t *testing.T) {
 	require.Equal(t, k.N()+1, len(rows), "one row per equation plus the header")
 	// The level top on fixed legs: only the group's three translations
 	// are free (its rotations are held), so K is 3 × 3 and diagonal with
-	// 4·12·EI/L³ (X, Y) and 4·EA/L (Z); see TestFourLegsHandCheck.
+	// 4·12·EIz/L³ (X), 4·12·EIy/L³ (Y) and 4·EA/L (Z); see
+	// TestFourLegsHandCheck.
 	require.Equal(t, 3, k.N())
-	assert.InEpsilon(t, 4.8e5, k.At(0, 0), 1e-12)
+	assert.InEpsilon(t, 9.6e5, k.At(0, 0), 1e-12)
+	assert.InEpsilon(t, 4.8e5, k.At(1, 1), 1e-12)
 	assert.InEpsilon(t, 8e8, k.At(2, 2), 1e-12)
 	assert.Equal(t, []string{"1", "group", "top", "UX"}, rows[1][:4])
 	for _, name := range []string{"M.mtx", "F-1-press.mtx", "F-2-push.mtx"} {
@@ -304,4 +308,84 @@ func TestExport(t *testing.T) {
 	load, err := sparse.ReadVector(ff)
 	require.NoError(t, err)
 	assert.Equal(t, []float64{0, 0, -4000}, load)
+}
+
+// TestModesHandCheck: a 120 kg rigid top on the four legs of
+// four-legs.toml, held level: three modes, sway along Y on k = 4·12·EIy/L³,
+// along X on 4·12·EIz/L³ and bounce on k = 4·EA/L, each f = √(k/m)/2π (a mass on
+// a spring; Inman, Engineering Vibration, §1.1). Every leg has loss
+// factor 0.02, so every mode has η = 0.02 (modal strain energy: Ungar and
+// Kerwin 1962, one material).
+func TestModesHandCheck(t *testing.T) {
+	const (
+		mass, EIy, EIz, EA, L = 120.0, 1e4, 2e4, 2e8, 1.0
+		eta                   = 0.02
+		tol                   = 1e-6 // dense eigen solve of a 3 × 3 problem; round-off only
+	)
+	fY := math.Sqrt(4*12*EIy/(L*L*L)/mass) / (2 * math.Pi)
+	fX := math.Sqrt(4*12*EIz/(L*L*L)/mass) / (2 * math.Pi)
+	fBounce := math.Sqrt(4*EA/L/mass) / (2 * math.Pi)
+	pic := filepath.Join(t.TempDir(), "mode.svg")
+	r := trestle(t, "", "modes", "--json", "--picture", pic, "testdata/four-legs.toml")
+	require.NoError(t, r.err)
+	var rep ModesCommandReport
+	decodeStrict(t, r.stdout, &rep)
+	require.Len(t, rep.Modes.Modes, 3, "three free directions: the top's translations")
+	m := rep.Modes.Modes
+	assert.InEpsilon(t, fY, m[0].FrequencyHz, tol)
+	assert.InEpsilon(t, fX, m[1].FrequencyHz, tol)
+	assert.InEpsilon(t, fBounce, m[2].FrequencyHz, tol)
+	require.NotNil(t, rep.FirstFrequencyHz)
+	assert.InEpsilon(t, fY, *rep.FirstFrequencyHz, tol)
+	// Each mode moves the whole mass along one axis.
+	assert.InEpsilon(t, 1, m[0].Participation[1], tol)
+	assert.InEpsilon(t, 1, m[1].Participation[0], tol)
+	assert.InEpsilon(t, 1, m[2].Participation[2], tol)
+	assert.Equal(t, "sway along Y", m[0].Motion)
+	assert.Equal(t, "bounce (vertical)", m[2].Motion)
+	for _, md := range m {
+		assert.InEpsilon(t, eta, md.LossFactor[1], tol)
+		assert.InEpsilon(t, eta/2, md.DampingRatio, tol)
+	}
+	assert.InEpsilon(t, mass, rep.Modes.TotalMassKg[2], tol)
+	data, err := os.ReadFile(pic)
+	require.NoError(t, err)
+	assert.Equal(t, map[string]int{"leg-1": 4, "leg-2": 4, "leg-3": 4, "leg-4": 4}, svgMembers(t, data))
+}
+
+// TestResponseHandCheck: the same mass on springs with loss factor η
+// taken as viscous damping ζ = η/2. Driving-point receptance of one
+// degree of freedom, H = 1/(k − ω²m + i·2ζ·ω·ωₙ·m): static stiffness k at
+// low frequency, and the smallest dynamic stiffness 2ζ·√(1 − ζ²)·k at the
+// peak ω = ωₙ·√(1 − 2ζ²) (Inman, Engineering Vibration, §2.2).
+func TestResponseHandCheck(t *testing.T) {
+	const (
+		mass, EI, L = 120.0, 1e4, 1.0
+		zeta        = 0.01
+	)
+	k := 4 * 12 * EI / (L * L * L)
+	fn := math.Sqrt(k/mass) / (2 * math.Pi)
+	csvPath := filepath.Join(t.TempDir(), "frf.csv")
+	r := trestle(t, "", "response", "--json", "--band", "0.05-40", "--points", "800", "--csv", csvPath, "testdata/four-legs.toml")
+	require.NoError(t, r.err)
+	var rep ResponseReport
+	decodeStrict(t, r.stdout, &rep)
+	require.Len(t, rep.Probes, 3)
+	x := rep.Probes[1] // along Y, where k = 4·12·EIy/L³
+	assert.Equal(t, "centre", x.Place)
+	assert.Equal(t, "UY", x.Direction)
+	// At 0.05 Hz the dynamic term is (0.05/10.07)² ≈ 2.5e-5 of k.
+	assert.InEpsilon(t, k, x.StaticNPerM, 1e-4)
+	require.NotEmpty(t, x.Peaks)
+	// The peak is refined by golden-section search: its frequency and
+	// height agree with the closed form to the search tolerance.
+	assert.InEpsilon(t, fn*math.Sqrt(1-2*zeta*zeta), x.Peaks[0].FrequencyHz, 1e-6)
+	assert.InEpsilon(t, 2*zeta*math.Sqrt(1-zeta*zeta)*k, x.Peaks[0].DynamicNPerM, 1e-6)
+	assert.InEpsilon(t, 2*zeta*math.Sqrt(1-zeta*zeta)*k, x.MinDynamicNPerM, 1e-6)
+	rows, err := os.ReadFile(csvPath)
+	require.NoError(t, err)
+	recs, err := csv.NewReader(bytes.NewReader(rows)).ReadAll()
+	require.NoError(t, err)
+	assert.Len(t, recs, 801, "a header and one row per frequency")
+	assert.Len(t, recs[0], 1+2*3, "frequency, then magnitude and phase per probe")
 }

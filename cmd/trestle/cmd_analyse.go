@@ -24,11 +24,11 @@ utilisation, checks and cautions. Works from any folder.`,
 	if err != nil {
 		return err
 	}
-	m, name, err := loadModel(demoArg, e.stdin)
+	m, name, dyn, err := loadModel(demoArg, e.stdin)
 	if err != nil {
 		return err
 	}
-	a, err := analyse(m, name, materials.Nominal)
+	a, err := analyse(m, name, materials.Nominal, dyn)
 	if err != nil {
 		return err
 	}
@@ -64,11 +64,11 @@ Governing numbers come first, details after.`,
 	if err != nil {
 		return err
 	}
-	m, name, err := loadModel(pos[0], e.stdin)
+	m, name, dyn, err := loadModel(pos[0], e.stdin)
 	if err != nil {
 		return err
 	}
-	a, err := analyse(m, name, l)
+	a, err := analyse(m, name, l, dyn)
 	if err != nil {
 		return err
 	}

@@ -111,11 +111,11 @@ magnification.`,
 	if err != nil {
 		return err
 	}
-	m, name, err := loadModel(pos[0], e.stdin)
+	m, name, dyn, err := loadModel(pos[0], e.stdin)
 	if err != nil {
 		return err
 	}
-	a, err := analyse(m, name, l)
+	a, err := analyse(m, name, l, dyn)
 	if err != nil {
 		return err
 	}

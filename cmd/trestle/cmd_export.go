@@ -54,7 +54,7 @@ contact. For checking trestle against other solvers or for research.`,
 	if err != nil {
 		return err
 	}
-	m, name, err := loadModel(pos[0], e.stdin)
+	m, name, _, err := loadModel(pos[0], e.stdin)
 	if err != nil {
 		return err
 	}

@@ -79,14 +79,14 @@ factor, displacement. Design to the worse end.`,
 	if err != nil {
 		return err
 	}
-	m, name, err := loadModel(pos[0], e.stdin)
+	m, name, dyn, err := loadModel(pos[0], e.stdin)
 	if err != nil {
 		return err
 	}
 	rep := RangesReport{Schema: schemaRanges, Model: name, Cautions: cautions,
 		Pending: append([]string(nil), pendingAnalyses...)}
 	for _, l := range materials.Levels {
-		a, err := analyse(m, name, l)
+		a, err := analyse(m, name, l, dyn)
 		if err != nil {
 			return fmt.Errorf("at %s material values: %w", l, err)
 		}
@@ -205,11 +205,11 @@ built-in demo; one of them may be "-" (standard input).`,
 	}
 	var reps [2]*AnalysisReport
 	for i, p := range pos {
-		m, name, err := loadModel(p, e.stdin)
+		m, name, dyn, err := loadModel(p, e.stdin)
 		if err != nil {
 			return err
 		}
-		a, err := analyse(m, name, l)
+		a, err := analyse(m, name, l, dyn)
 		if err != nil {
 			return err
 		}

@@ -51,13 +51,14 @@ func modelName(f *modelfile.File) string {
 	return f.Name
 }
 
-// loadModel reads a model file and returns its model and report name.
-func loadModel(name string, stdin io.Reader) (*springnet.Model, string, error) {
+// loadModel reads a model file and returns its model, report name and
+// dynamics inputs.
+func loadModel(name string, stdin io.Reader) (*springnet.Model, string, dynamics, error) {
 	f, err := loadFile(name, stdin)
 	if err != nil {
-		return nil, "", err
+		return nil, "", dynamics{}, err
 	}
-	return f.Model, modelName(f), nil
+	return f.Model, modelName(f), dynamicsOf(f), nil
 }
 
 // parseLevel reads a --level value.

@@ -7,6 +7,8 @@ import (
 	"math"
 	"strings"
 	"text/tabwriter"
+
+	"github.com/trestle-go/trestle/springnet"
 )
 
 // writeJSON writes v indented, with a final newline.
@@ -72,7 +74,7 @@ func writeAnalysis(w io.Writer, r *AnalysisReport, u unitSystem) {
 	if g.FirstFrequencyHz != nil {
 		fmt.Fprintf(tw, "  first natural frequency\t%s Hz\t\n", num(*g.FirstFrequencyHz))
 	} else {
-		fmt.Fprintf(tw, "  first natural frequency\t—\tnot available in this build\n")
+		fmt.Fprintf(tw, "  first natural frequency\t—\tno modal result (see warnings)\n")
 	}
 	if g.MaxUtilisationMember != "" {
 		fmt.Fprintf(tw, "  highest utilisation\t%s\t%s in case %q\n", pct(g.MaxUtilisation), g.MaxUtilisationMember, g.MaxUtilisationCase)
@@ -131,13 +133,7 @@ func writeAnalysis(w io.Writer, r *AnalysisReport, u unitSystem) {
 		tw.Flush()
 	}
 	if r.Modes != nil {
-		heading(w, "MODES")
-		tw = table(w)
-		fmt.Fprintf(tw, "  mode\tf [Hz]\tloss factor η\tdamping ratio ζ\n")
-		for _, md := range r.Modes.Modes {
-			fmt.Fprintf(tw, "  %d\t%s\t%s\t%s\n", md.Number, num(md.FrequencyHz), num(md.LossFactor), num(md.Ratio))
-		}
-		tw.Flush()
+		writeModesTable(w, r.Modes)
 	}
 
 	for _, c := range r.Cases {
@@ -220,4 +216,45 @@ func writeAnalysis(w io.Writer, r *AnalysisReport, u unitSystem) {
 		}
 	}
 	writeCautions(w)
+}
+
+// writeModesTable prints the natural modes: frequency, what moves, modal
+// damping, effective mass shares, and the running-speed check.
+func writeModesTable(w io.Writer, m *ModesReport) {
+	heading(w, "NATURAL MODES (modal damping by strain energy; effective mass shares)")
+	tw := table(w)
+	fmt.Fprintf(tw, "  mode\tf [Hz]\tmotion\tloss factor η (low–nom–high)\tζ\tX\tY\tZ\tmost energy in\n")
+	for _, md := range m.Modes {
+		energy := "—"
+		if len(md.Energy) > 0 {
+			energy = fmt.Sprintf("%s (%s)", md.Energy[0].Group, pct(md.Energy[0].Share))
+		}
+		fmt.Fprintf(tw, "  %d\t%s\t%s\t%s – %s – %s\t%s\t%s\t%s\t%s\t%s\n", md.Number, num(md.FrequencyHz), md.Motion,
+			num(md.LossFactor[0]), num(md.LossFactor[1]), num(md.LossFactor[2]), num(md.DampingRatio),
+			pct(md.Participation[0]), pct(md.Participation[1]), pct(md.Participation[2]), energy)
+	}
+	tw.Flush()
+	if m.SturmCount >= 0 {
+		fmt.Fprintf(w, "  Sturm check: %d natural frequencies below %s Hz, none missed.\n", m.SturmCount, num(m.SturmBelowHz))
+	}
+	if len(m.Speeds) > 0 {
+		fmt.Fprintf(w, "\n  Running speeds checked (natural frequencies within %.0f %% of an excitation band):\n", 100*springnet.DefaultMargin)
+		for _, sp := range m.Speeds {
+			fmt.Fprintf(w, "  – %s\n", sp)
+		}
+		if len(m.Resonances) == 0 {
+			fmt.Fprintf(w, "  No natural frequency is near an excitation band.\n")
+		} else {
+			tw = table(w)
+			fmt.Fprintf(tw, "  mode\tf [Hz]\tspeed\tharmonic\tband [Hz]\tseparation\n")
+			for _, r := range m.Resonances {
+				sep := "inside"
+				if r.Separation > 0 {
+					sep = pct(r.Separation)
+				}
+				fmt.Fprintf(tw, "  %d\t%s\t%s\t%d\t%s – %s\t%s\n", r.Mode, num(r.FrequencyHz), r.Speed, r.Order, num(r.LowHz), num(r.HighHz), sep)
+			}
+			tw.Flush()
+		}
+	}
 }

@@ -14,6 +14,8 @@ const (
 	schemaMaterial = "trestle.materials/1"
 	schemaSections = "trestle.sections/1"
 	schemaSection  = "trestle.section/1"
+	schemaModes    = "trestle.modes/1"
+	schemaResponse = "trestle.response/1"
 )
 
 // AnalysisReport is the JSON form of `trestle analyse` and `trestle demo`.
@@ -170,18 +172,45 @@ type BucklingReport struct {
 	Note    string    `json:"note,omitempty"`
 }
 
-// ModesReport holds natural frequencies and modal damping.
+// ModesReport holds natural frequencies, modal damping and the check of
+// the machine's running speeds.
 type ModesReport struct {
-	Modes []ModeReport `json:"modes"`
+	Modes        []ModeReport      `json:"modes"`
+	SturmCount   int               `json:"sturm_count"` // eigenvalues below SturmBelowHz by the Sturm count; -1 when not checked
+	SturmBelowHz float64           `json:"sturm_below_hz"`
+	TotalMassKg  [3]float64        `json:"total_mass_kg"` // mass moving with a rigid translation along X, Y, Z
+	Resonances   []ResonanceReport `json:"resonances"`    // natural frequencies near an excitation band
+	Speeds       []string          `json:"speeds"`        // the running speeds checked, as read
 }
 
 // ModeReport is one natural mode.
 type ModeReport struct {
-	Number      int     `json:"number"`
+	Number        int            `json:"number"` // from 1, ascending frequency
+	FrequencyHz   float64        `json:"frequency_hz"`
+	RigidBody     bool           `json:"rigid_body"`    // a free (zero-frequency) motion
+	LossFactor    [3]float64     `json:"loss_factor"`   // low, nominal, high (modal strain energy)
+	DampingRatio  float64        `json:"damping_ratio"` // nominal ζ = η/2
+	Participation [6]float64     `json:"participation"` // effective mass share along X, Y, Z, about X, Y, Z
+	Motion        string         `json:"motion"`        // the direction it mostly moves in, in words
+	Energy        []EnergyReport `json:"energy"`        // strain-energy shares by material or group, largest first
+}
+
+// EnergyReport is one group's share of a mode's strain energy.
+type EnergyReport struct {
+	Group string  `json:"group"`
+	Share float64 `json:"share"`
+}
+
+// ResonanceReport is a natural frequency within the margin of an
+// excitation band of a running speed.
+type ResonanceReport struct {
+	Mode        int     `json:"mode"`
 	FrequencyHz float64 `json:"frequency_hz"`
-	LossFactor  float64 `json:"loss_factor,omitempty"`
-	Ratio       float64 `json:"damping_ratio,omitempty"`
-	Description string  `json:"description,omitempty"`
+	Speed       string  `json:"speed"`
+	Order       int     `json:"order"` // harmonic
+	LowHz       float64 `json:"low_hz"`
+	HighHz      float64 `json:"high_hz"`
+	Separation  float64 `json:"separation"` // relative distance from the band; 0 inside it
 }
 
 // RangesReport is the JSON form of `trestle ranges`.
@@ -316,4 +345,50 @@ type SectionPart struct {
 	AM2      float64 `json:"a_m2"`
 	IyM4     float64 `json:"iy_m4"`
 	IzM4     float64 `json:"iz_m4"`
+}
+
+// ModesCommandReport is the JSON form of `trestle modes`.
+type ModesCommandReport struct {
+	Schema           string       `json:"schema"`
+	Model            string       `json:"model"`
+	Level            string       `json:"level"`
+	FirstFrequencyHz *float64     `json:"first_frequency_hz"` // lowest non-zero natural frequency; null if none
+	Modes            *ModesReport `json:"modes"`
+	Picture          string       `json:"picture,omitempty"`
+	Warnings         []string     `json:"warnings"`
+	Cautions         []string     `json:"cautions"`
+}
+
+// ResponseReport is the JSON form of `trestle response`.
+type ResponseReport struct {
+	Schema   string          `json:"schema"`
+	Model    string          `json:"model"`
+	Level    string          `json:"level"`
+	BandHz   [2]float64      `json:"band_hz"`
+	Modes    int             `json:"modes"` // modes in the sums
+	Probes   []ProbeResponse `json:"probes"`
+	Warnings []string        `json:"warnings"`
+	Cautions []string        `json:"cautions"`
+}
+
+// ProbeResponse is the driving-point response at one place and direction:
+// the motion there per unit harmonic force there, along the same axis.
+type ProbeResponse struct {
+	Place           string       `json:"place"`
+	Direction       string       `json:"direction"`                     // UX, UY or UZ
+	StaticNPerM     float64      `json:"static_n_per_m"`                // |1/H| at the bottom of the band
+	MinDynamicNPerM float64      `json:"min_dynamic_stiffness_n_per_m"` // smallest |1/H| in the band
+	MinDynamicAtHz  float64      `json:"min_dynamic_at_hz"`
+	Peaks           []PeakReport `json:"peaks"`
+	FrequencyHz     []float64    `json:"frequency_hz"`
+	ReceptanceMPerN []float64    `json:"receptance_m_per_n"` // |H|
+	PhaseRad        []float64    `json:"phase_rad"`
+}
+
+// PeakReport is a resonance peak of a receptance.
+type PeakReport struct {
+	FrequencyHz     float64 `json:"frequency_hz"`
+	ReceptanceMPerN float64 `json:"receptance_m_per_n"`
+	DynamicNPerM    float64 `json:"dynamic_stiffness_n_per_m"`
+	Mode            int     `json:"mode"` // nearest mode, from 1
 }

@@ -32,6 +32,8 @@ var (
 	floorColour   = color.RGBA{140, 110, 80, 255}  // floor and ground
 	mountColour   = color.RGBA{20, 90, 200, 255}   // mounts
 	white         = color.RGBA{255, 255, 255, 255}
+	groupColour   = color.RGBA{90, 90, 110, 255}   // rigid group outline
+	groupFill     = color.RGBA{215, 218, 228, 255} // rigid group shading
 )
 
 // Colour returns the colour of value v on a scale whose red end is max

@@ -35,6 +35,7 @@ func frameScene() draw.Scene {
 			{Name: "pad", A: 0, B: 3, Style: draw.Spring, Value: 0.5, Rated: true},
 		},
 		Mounts:  []draw.Mount{{Name: "M1", At: draw.Point{X: 0.5, Z: 1}, Move: draw.Point{X: 1e-3}}},
+		Groups:  []draw.Group{{Name: "beam", Nodes: []int{2, 3}}},
 		Colours: draw.Colours{Name: "utilisation", Max: 1, Percent: true},
 		Shape:   "deflection under \"push\"",
 		Notes:   []string{"a note"},
@@ -138,12 +139,19 @@ func TestSVGMarksFeetSupportsMounts(t *testing.T) {
 	assert.Equal(t, 4, count["foot"], "one foot × four views")
 	assert.Equal(t, 4, count["support"], "one support × four views")
 	assert.Equal(t, 4, count["mount"], "one mount × four views")
+	assert.Equal(t, 4, count["group"], "one rigid group × four views")
 	assert.Equal(t, 4*len(s.Members), count["ghost"], "the unloaded outline is drawn under a shape")
 	txt := buf.String()
 	assert.Contains(t, txt, "portal &lt;test&gt; &amp; co", "title is escaped")
 	assert.Contains(t, txt, "right: utilisation 140 %", "member tooltip names the value")
 	assert.Contains(t, txt, "(automatic", "legend states the scale")
 	assert.Contains(t, txt, "drawn ×", "legend states the factor")
+	assert.Contains(t, txt, "largest 1.02 mm", "legend states the largest motion: √(1² + 0.2²) mm")
+
+	s.Sizeless = true
+	buf.Reset()
+	require.NoError(t, s.SVG(&buf))
+	assert.NotContains(t, buf.String(), "largest", "a mode shape has no size to state")
 }
 
 func TestPNGDecodes(t *testing.T) {
@@ -186,6 +194,7 @@ func TestValidate(t *testing.T) {
 		{"NaN position", func(s *draw.Scene) { s.Nodes[1].At.X = math.NaN() }, `node 1 "B"`},
 		{"Inf value", func(s *draw.Scene) { s.Members[1].Value = math.Inf(1) }, `member 1 "right": value is not finite`},
 		{"negative scale", func(s *draw.Scene) { s.Scale = -1 }, "scale -1"},
+		{"group node out of range", func(s *draw.Scene) { s.Groups[0].Nodes[1] = -2 }, `group 0 "beam": node -2 out of range`},
 		{"empty", func(s *draw.Scene) { *s = draw.Scene{} }, "no nodes"},
 	}
 	for _, tc := range tests {
@@ -231,9 +240,13 @@ func TestFromModel(t *testing.T) {
 	sp := m.AddSpring(b, c, springnet.Spring{Axial: 1e6})
 	m.AddFoot(a, springnet.Foot{K: springnet.Stiffness6{Z: 1e8}})
 	m.Fix(c, springnet.AllDOF)
+	d := m.AddNode("D", springnet.Vec{X: 1, Y: 1, Z: 1})
+	m.AddRigidGroup("top", b, d)
 	m.AddMount("seat", springnet.Vec{X: 0.5, Z: 1}, b)
 	s := draw.FromModel(&m)
-	require.Len(t, s.Nodes, 3)
+	require.Len(t, s.Nodes, 4)
+	require.Len(t, s.Groups, 1)
+	assert.Equal(t, draw.Group{Name: "top", Nodes: []int{1, 3}}, s.Groups[0])
 	require.Len(t, s.Members, 2, "feet are node marks, not members")
 	assert.Equal(t, "post", s.Members[0].Name)
 	assert.Equal(t, draw.Bar, s.Members[0].Style)
@@ -242,6 +255,7 @@ func TestFromModel(t *testing.T) {
 	assert.True(t, s.Nodes[0].Foot)
 	assert.True(t, s.Nodes[2].Support)
 	assert.False(t, s.Nodes[1].Foot || s.Nodes[1].Support)
+	assert.False(t, s.Nodes[1].Label, "only feet and supports are labelled")
 	require.Len(t, s.Mounts, 1)
 	assert.Equal(t, draw.Point{X: 0.5, Z: 1}, s.Mounts[0].At)
 }

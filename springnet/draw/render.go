@@ -256,6 +256,19 @@ func (r *renderer) view(v view, f frame) {
 	if v == front || v == side || v == iso {
 		r.floor(v, f)
 	}
+	// Rigid groups: a shaded outline through their nodes, drawn under the
+	// members.
+	for i, g := range s.Groups {
+		if len(g.Nodes) < 2 {
+			continue
+		}
+		pts := make([]pt, len(g.Nodes))
+		for j, n := range g.Nodes {
+			pts[j] = r.place(v, f, r.shown(n))
+		}
+		r.add(prim{op: opPoly, class: "group", id: fmt.Sprintf("%s-rg%d", name, i), title: "rigid " + g.Name,
+			pts: pts, fill: groupFill, stroke: groupColour, width: 1.5})
+	}
 	// The unloaded outline.
 	if r.k > 0 {
 		for i, m := range s.Members {
@@ -483,7 +496,11 @@ func (r *renderer) legend() {
 			if s.Scale > 0 {
 				how = "chosen"
 			}
-			text(fmt.Sprintf("displacements drawn ×%s (%s scale); largest %s mm", sig(r.k), how, sig(1e3*s.maxMove())), fontSmall, false)
+			if s.Sizeless {
+				text(fmt.Sprintf("drawn ×%s (%s scale); the shape has no size of its own", sig(r.k), how), fontSmall, false)
+			} else {
+				text(fmt.Sprintf("displacements drawn ×%s (%s scale); largest %s mm", sig(r.k), how, sig(1e3*s.maxMove())), fontSmall, false)
+			}
 			text("grey dashed: unloaded", fontSmall, false)
 		} else {
 			text("nothing moves", fontSmall, false)
@@ -505,6 +522,9 @@ func (r *renderer) legend() {
 	key(func(p pt) {
 		r.add(prim{op: opPoly, class: "key", pts: []pt{{p.x, p.y - 6}, {p.x + 6, p.y}, {p.x, p.y + 6}, {p.x - 6, p.y}}, fill: mountColour})
 	}, "mount (machine seat)")
+	key(func(p pt) {
+		r.add(prim{op: opPoly, class: "key", pts: rect(p.x-10, p.y-5, 20, 10), fill: groupFill, stroke: groupColour, width: 1.5})
+	}, "rigid group (top, bed)")
 	key(func(p pt) {
 		r.add(prim{op: opLine, class: "key", pts: []pt{{p.x - 10, p.y}, {p.x + 10, p.y}}, stroke: inkColour, width: memberWidth(Beam)})
 	}, "beam")

@@ -54,6 +54,14 @@ type Mount struct {
 	Move Point // displacement in the shape shown [m]
 }
 
+// Group is a set of nodes that move as one rigid body (a machine bed, a
+// thick top plate): drawn as a shaded outline through its nodes in the
+// order given.
+type Group struct {
+	Name  string
+	Nodes []int // indices into Scene.Nodes
+}
+
 // Colours says what member colours mean.
 type Colours struct {
 	Name    string  // e.g. "utilisation"; "" means no colour scale (all members one colour)
@@ -67,12 +75,16 @@ type Scene struct {
 	Nodes   []Node
 	Members []Member
 	Mounts  []Mount
+	Groups  []Group
 	Colours Colours
 	// Shape says what the node displacements are, e.g. `deflection under
 	// "weight"` or "mode 1, 23.4 Hz"; "" draws no displaced shape.
 	Shape string
 	// Scale multiplies the displacements; 0 means AutoScale.
 	Scale float64
+	// Sizeless says the displacements have no physical size (a mode
+	// shape): the legend gives no largest displacement.
+	Sizeless bool
 	// Notes are extra legend lines (a caution, a source).
 	Notes []string
 }
@@ -83,7 +95,8 @@ const AutoFraction = 0.08
 
 // FromModel returns a Scene with the nodes (named; feet and fixed nodes
 // marked), the members (bars, beams and two-node springs, named, styled by
-// kind, unrated) and the mounts of m. Feet and supports are labelled.
+// kind, unrated), the rigid groups and the mounts of m. Feet and supports
+// are labelled.
 func FromModel(m *springnet.Model) Scene {
 	var s Scene
 	s.Nodes = make([]Node, m.NumNodes())
@@ -113,6 +126,14 @@ func FromModel(m *springnet.Model) Scene {
 	for i := range s.Nodes {
 		s.Nodes[i].Label = s.Nodes[i].Foot || s.Nodes[i].Support
 	}
+	for g := 0; g < m.NumGroups(); g++ {
+		id := springnet.GroupID(g)
+		grp := Group{Name: m.GroupName(id)}
+		for _, n := range m.GroupNodes(id) {
+			grp.Nodes = append(grp.Nodes, int(n))
+		}
+		s.Groups = append(s.Groups, grp)
+	}
 	for i := 0; i < m.NumMounts(); i++ {
 		id := springnet.MountID(i)
 		s.Mounts = append(s.Mounts, Mount{Name: m.MountName(id), At: pointOf(m.MountAt(id))})
@@ -139,6 +160,14 @@ func (s *Scene) Validate() error {
 		}
 		if mb.Rated && !fin(mb.Value) {
 			errs = append(errs, fmt.Errorf("draw: member %d %q: value is not finite", i, mb.Name))
+		}
+	}
+	for i, g := range s.Groups {
+		for _, n := range g.Nodes {
+			if n < 0 || n >= len(s.Nodes) {
+				errs = append(errs, fmt.Errorf("draw: group %d %q: node %d out of range [0, %d)", i, g.Name, n, len(s.Nodes)))
+				break
+			}
 		}
 	}
 	for i, mt := range s.Mounts {
