@@ -71,8 +71,8 @@ type builder struct {
 	f      *File
 	mats   map[string]materials.Material
 	secs   map[string]sections.Section
-	badSec map[string]bool
-	lines  map[string]int // "kind\x00name" -> line, for Validate messages
+	badSec map[string]bool // section specs (and "material\x00name") already reported
+	lines  map[string]int  // "kind\x00name" -> line, for Validate messages
 
 	inGroup map[springnet.NodeID]bool // nodes in a rigid group, once groups are built
 }
@@ -308,6 +308,9 @@ func (b *builder) material(line int, what, name string) (materials.Material, boo
 	if m, ok := b.mats[name]; ok {
 		return m, true
 	}
+	if b.badSec["material\x00"+name] {
+		return materials.Material{}, false // reported at its first use
+	}
 	m, err := materials.Lookup(name)
 	if err != nil {
 		var own []string
@@ -320,6 +323,7 @@ func (b *builder) material(line int, what, name string) (materials.Material, boo
 			hint = ": " + strings.TrimPrefix(err.Error(), "materials: ")
 		}
 		b.el.add(line, "%s names unknown material %q%s", what, name, hint)
+		b.badSec["material\x00"+name] = true
 		return m, false
 	}
 	b.mats[name] = m
@@ -331,8 +335,7 @@ func (b *builder) section(line int, what, spec string) (sections.Section, bool) 
 		return s, true
 	}
 	if b.badSec[spec] {
-		b.el.add(line, "%s: bad section %q (see above)", what, spec)
-		return nil, false
+		return nil, false // reported at its first use
 	}
 	s, err := sections.Parse(spec)
 	if err != nil {
