@@ -228,32 +228,41 @@ func (r *ModeResult) denseSturm() error {
 	}
 	scale /= math.Max(matTrace(r.mm), math.SmallestNonzeroFloat64)
 	gap := 1e-3 * math.Max(math.Abs(top), 1e-6*scale)
-	var cnt int
-	var err error
-	sigma := top + gap
-	for try := 0; try < 4; try++ {
-		cnt, err = eigen.CountBelow(r.k, r.mm, sigma)
-		var sing *eigen.SingularError
-		if !errors.As(err, &sing) {
+	// Count at σ = top + gap; if that takes in eigenvalues beyond the
+	// ones returned (a cluster at the top), move σ closer to the top.
+	var cnt, below int
+	var sigma float64
+	for shrink := 0; shrink < 4; shrink++ {
+		var err error
+		sigma = top + gap
+		for try := 0; try < 4; try++ {
+			cnt, err = eigen.CountBelow(r.k, r.mm, sigma)
+			var sing *eigen.SingularError
+			if !errors.As(err, &sing) {
+				break
+			}
+			sigma += gap / 7 // σ hit an eigenvalue: move on
+		}
+		if err != nil {
+			return fmt.Errorf("springnet: modes: Sturm check: %w", err)
+		}
+		below = 0
+		for _, l := range r.lambda {
+			if l < sigma {
+				below++
+			}
+		}
+		if cnt <= below {
 			break
 		}
-		sigma += gap // σ hit an eigenvalue: move on
+		gap /= 1000
 	}
-	if err != nil {
-		return fmt.Errorf("springnet: modes: Sturm check: %w", err)
-	}
-	below := 0
-	for _, l := range r.lambda {
-		if l < sigma {
-			below++
-		}
-	}
-	// The dense path returns the lowest modes; any eigenvalue below σ that
-	// it did not return lies between the highest returned and σ (an
-	// equal eigenvalue left out of the count asked for): not a miss.
 	r.sturm.Count = cnt
 	r.sturm.Below = hzOf(sigma)
-	r.sturm.Checked = cnt >= below
+	// cnt > below: an eigenvalue within round-off of the highest returned
+	// one was left out of the number asked for; nothing below it was
+	// missed, but the count cannot show it (Checked stays false).
+	r.sturm.Checked = cnt == below
 	if cnt < below {
 		return &eigen.MissedModesError{Low: math.Inf(-1), High: sigma, Count: cnt, Found: below}
 	}
