@@ -17,6 +17,7 @@ type Error struct {
 	Msg  string // names the item: `beam "brace-3" names unknown node "C2"; did you mean "C3"?`
 }
 
+// Error returns "file:line: message", or what of it is known.
 func (e *Error) Error() string {
 	switch {
 	case e.File != "" && e.Line > 0:

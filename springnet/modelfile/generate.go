@@ -33,6 +33,7 @@ const (
 	Right             // x = Width
 )
 
+// String returns "front", "back", "left" or "right".
 func (f Face) String() string {
 	switch f {
 	case Front:

@@ -442,6 +442,20 @@ func TestLimits(t *testing.T) {
 	})
 }
 
+func TestBoxInertia(t *testing.T) {
+	// A uniform cube of side a about an axis through its centre: I = m·a²/6
+	// (Meriam & Kraige, Engineering Mechanics: Dynamics, mass moments of inertia table).
+	const m, a = 12.0, 0.5
+	got := modelfile.BoxInertia(m, springnet.Vec{X: a, Y: a, Z: a})
+	const rel = 1e-15 // one rounding
+	assert.InEpsilon(t, m*a*a/6, got.X, rel)
+	assert.InEpsilon(t, m*a*a/6, got.Y, rel)
+	assert.InEpsilon(t, m*a*a/6, got.Z, rel)
+	// A thin rod along X (Ly = Lz = 0): Iyy = Izz = m·L²/12, Ixx = 0.
+	rod := modelfile.BoxInertia(m, springnet.Vec{X: 2})
+	assert.Equal(t, springnet.Vec{X: 0, Y: m * 4 / 12, Z: m * 4 / 12}, rod)
+}
+
 func TestWriteRefusesNonFinite(t *testing.T) {
 	c := &modelfile.Contents{Nodes: []modelfile.Node{{Name: "A", At: springnet.Vec{X: math.NaN()}}}}
 	var buf bytes.Buffer
