@@ -187,4 +187,11 @@ func TestComplianceSensitivity(t *testing.T) {
 	assert.InEpsilon(t, dL, byName["leg steel"].DC, 1e-6)
 	assert.InEpsilon(t, dB, byName["brace alu"].DC, 1e-6)
 	assert.InEpsilon(t, dL/eL, byName["leg steel"].DCdE, 1e-6)
+	// Invariant: Σ_k dC/ds_k = −2U = −C for a linear case (scaling every
+	// stiffness by 1 + s scales u by 1/(1 + s)).
+	sumDC := 0.0
+	for _, s := range sens {
+		sumDC += s.DC
+	}
+	assert.InEpsilon(t, -compliance(eL, eB), sumDC, 1e-9)
 }

@@ -78,6 +78,12 @@ func TestModesSparseAgainstDenseRandom(t *testing.T) {
 					assert.InEpsilon(t, de.Frequency(i), sp.Frequency(i), 1e-8, "mode %d", i+1)
 					assert.False(t, sp.RigidBody(i))
 				}
+				// Invariant: element energy shares of a mode add up to 1.
+				sum := 0.0
+				for _, e := range sp.ElementEnergiesTo(nil, 0) {
+					sum += e
+				}
+				assert.InEpsilon(t, 1, sum, 1e-12)
 				assert.True(t, sp.Sturm().Checked)
 				assert.True(t, de.Sturm().Checked)
 				assert.Equal(t, count, sp.Sturm().Count)

@@ -227,6 +227,7 @@ func TestModesRigidTopAgainstGonum(t *testing.T) {
 				nodes = append(nodes, n)
 			}
 			g := m.AddRigidGroupAt("top", springnet.Vec{}, nodes...)
+			corner := m.AddMount("corner", springnet.Vec{X: 0.4, Y: 0.3, Z: 0.9}, g)
 			ms, err := springnet.Machine{Kg: kg, CG: springnet.Vec{X: cg[0], Y: cg[1], Z: cg[2]}, Inertia: tc.j}.Masses()
 			require.NoError(t, err)
 			for _, x := range ms {
@@ -263,6 +264,16 @@ func TestModesRigidTopAgainstGonum(t *testing.T) {
 			for _, d := range []springnet.DOF{springnet.UX, springnet.UY, springnet.UZ} {
 				assert.InEpsilon(t, kg, r.TotalMass(d), modeTight)
 				assert.InEpsilon(t, 1, r.CumulativeParticipation(5, d), modeTight)
+			}
+			// A mount on the top moves with it rigidly: u = u_g + θ × r
+			// (rigid-body kinematics), in every mode.
+			for i := 0; i < 6; i++ {
+				ug := r.Shape(i, g)
+				um := r.Shape(i, corner)
+				want := ug.Translation().Add(ug.Rotation().Cross(springnet.Vec{X: 0.4, Y: 0.3, Z: 0.9}))
+				assert.InDelta(t, want.X, um.UX, 1e-12)
+				assert.InDelta(t, want.Y, um.UY, 1e-12)
+				assert.InDelta(t, want.Z, um.UZ, 1e-12)
 			}
 			// All strain energy is in the feet.
 			sh := r.MaterialEnergy(0)
