@@ -275,3 +275,113 @@ func TestBeamTorsionBredt(t *testing.T) {
 	assert.InEpsilon(t, torque, math.Abs(mr.A.T), beamTol)
 	assert.InEpsilon(t, torque, math.Abs(mr.B.T), beamTol)
 }
+
+// sharpAngle returns the properties of a sharp-cornered angle with legs b
+// along +y and h along +z from the heel at the origin, thickness tk, as
+// two rectangles (the composite-area method of any mechanics-of-materials
+// text, e.g. Gere & Goodno, Mechanics of Materials, ch. 12): area,
+// centroid from the heel, and Iy, Iz, Iyz about the centroid.
+func sharpAngle(b, h, tk float64) (area, yc, zc, iy, iz, iyz float64) {
+	type rect struct{ y0, y1, z0, z1 float64 }
+	rs := []rect{{0, b, 0, tk}, {0, tk, tk, h}}
+	var sy, sz float64
+	for _, r := range rs {
+		a := (r.y1 - r.y0) * (r.z1 - r.z0)
+		area += a
+		sy += a * (r.y0 + r.y1) / 2
+		sz += a * (r.z0 + r.z1) / 2
+	}
+	yc, zc = sy/area, sz/area
+	for _, r := range rs {
+		w, d := r.y1-r.y0, r.z1-r.z0
+		a := w * d
+		dy, dz := (r.y0+r.y1)/2-yc, (r.z0+r.z1)/2-zc
+		iy += w*d*d*d/12 + a*dz*dz
+		iz += d*w*w*w/12 + a*dy*dy
+		iyz += a * dy * dz
+	}
+	return area, yc, zc, iy, iz, iyz
+}
+
+func TestBeamAngleCantileverUnsymmetricBending(t *testing.T) {
+	// A cantilever whose section has a product of area deflects out of
+	// the plane of the load. With v, w the tip deflections along the
+	// section's geometric y and z, the generalised flexure formula
+	// (Boresi & Schmidt, Advanced Mechanics of Materials, nonsymmetrical
+	// bending of straight beams) gives, for ε = −y·v'' − z·w'' and a tip
+	// load (Py, Pz) at x = L,
+	//
+	//	[Iz Iyz; Iyz Iy]·[v''; w''] = (L − x)/E·[Py; Pz]
+	//	v = L³/(3·E·D)·(Iy·Py − Iyz·Pz),  w = L³/(3·E·D)·(Iz·Pz − Iyz·Py)
+	//
+	// with D = Iy·Iz − Iyz². Sharp 50 × 50 × 5 mm and 80 × 40 × 6 mm
+	// angles, along X (geometric y = global Y, z = global Z) with and
+	// without a roll, and upright along Z.
+	const l, e, p = 1.0, 200e9, 100.0
+	tests := []struct {
+		name    string
+		b, h    float64
+		dir, up springnet.Vec
+		roll    float64
+		load    springnet.Vec
+	}{
+		{"equal angle along X, vertical load", 0.05, 0.05, springnet.Vec{X: 1}, springnet.Vec{}, 0, springnet.Vec{Z: -p}},
+		{"equal angle along X, sideways load", 0.05, 0.05, springnet.Vec{X: 1}, springnet.Vec{}, 0, springnet.Vec{Y: p}},
+		{"unequal angle along X, rolled 0.4 rad", 0.08, 0.04, springnet.Vec{X: 1}, springnet.Vec{}, 0.4, springnet.Vec{Y: p / 2, Z: -p}},
+		{"unequal angle upright, up X", 0.08, 0.04, springnet.Vec{Z: 1}, springnet.Vec{X: 1}, 0, springnet.Vec{X: p, Y: p}},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			const tk = 0.005
+			area, _, _, iy, iz, iyz := sharpAngle(tc.b, tc.h, tk)
+			sec := sections.Angle{B: tc.b, H: tc.h, T: tk}
+			pr, err := sec.Properties()
+			require.NoError(t, err)
+			require.InEpsilon(t, area, pr.A, 1e-12, "the section is the two rectangles")
+			require.InEpsilon(t, iyz, pr.Iyz, 1e-9, "same product of area, same sign")
+			m, tip, _ := beamCantilever(tc.dir, l, springnet.Beam{Material: beamSteel(), Section: sec, Up: tc.up, Roll: tc.roll})
+			m.AddLoad(tip, springnet.Load{FX: tc.load.X, FY: tc.load.Y, FZ: tc.load.Z})
+			res, err := springnet.Static(m, nil)
+			require.NoError(t, err)
+			// Geometric section axes in global coordinates: the frame of
+			// Beam (z in the plane of the axis and up, y = z × x, then
+			// the roll turning y towards z).
+			ex := tc.dir
+			up := tc.up
+			if up == (springnet.Vec{}) {
+				up = springnet.Vec{Z: 1}
+			}
+			ez := up.Sub(ex.Scale(up.Dot(ex)))
+			ez = ez.Scale(1 / ez.Norm())
+			ey := ez.Cross(ex)
+			c, s := math.Cos(tc.roll), math.Sin(tc.roll)
+			ey, ez = ey.Scale(c).Add(ez.Scale(s)), ey.Scale(-s).Add(ez.Scale(c))
+			py, pz := tc.load.Dot(ey), tc.load.Dot(ez)
+			d := iy*iz - iyz*iyz
+			v := l * l * l / (3 * e * d) * (iy*py - iyz*pz)
+			w := l * l * l / (3 * e * d) * (iz*pz - iyz*py)
+			want := ey.Scale(v).Add(ez.Scale(w))
+			got := res.Displacement(tip)
+			scale := want.Norm()
+			assert.InDelta(t, want.X, got.UX, beamTol*scale, "UX")
+			assert.InDelta(t, want.Y, got.UY, beamTol*scale, "UY")
+			assert.InDelta(t, want.Z, got.UZ, beamTol*scale, "UZ")
+		})
+	}
+}
+
+func TestBucklingAngleColumnMinorAxis(t *testing.T) {
+	// A fixed–free column of a sharp 50 × 50 × 5 mm equal angle buckles
+	// about its minor principal axis: P_cr = π²·E·I_min/(2L)² (Timoshenko
+	// & Gere, Theory of Elastic Stability, ch. 2), I_min = (Iy+Iz)/2 −
+	// √(((Iy−Iz)/2)² + Iyz²) (Gere & Goodno, principal axes). Eight
+	// elements, as in TestBucklingEulerColumn.
+	const l, e, tk, b = 1.5, 200e9, 0.005, 0.05
+	_, _, _, iy, iz, iyz := sharpAngle(b, b, tk)
+	imin := (iy+iz)/2 - math.Hypot((iy-iz)/2, iyz)
+	m, _ := bucklingColumn(8, l, sections.Angle{B: b, H: b, T: tk}, springnet.AllDOF, 0)
+	res, err := springnet.Buckling(m, springnet.DefaultCase, &springnet.BucklingSettings{Modes: 2})
+	require.NoError(t, err)
+	want := math.Pi * math.Pi * e * imin / (4 * l * l) / 1e3 // the column carries 1 kN
+	assert.InEpsilon(t, want, res.Factor(0), eulerTol)
+}

@@ -3,8 +3,6 @@ package springnet
 import (
 	"fmt"
 	"math"
-
-	"github.com/trestle-go/trestle/sections"
 )
 
 // KBasis selects the effective-length factors of the member buckling
@@ -228,14 +226,10 @@ func (nt *net) euler(e ElementID, r *MemberResult, s *MemberSettings, touch []in
 		over = s.K[e]
 	}
 	l := p.frame.L
+	// Local axes are principal (a section with a product of area is
+	// rolled by its principal angle, memberSection), so an angle buckles
+	// about its minor principal axis, local z.
 	ei := [2]float64{p.mp.eiy, p.mp.eiz}
-	if emin, ok := principalMinEI(x, &p.mp); ok {
-		// Geometric axes that are not principal (an angle): the member
-		// buckles about its minor principal axis; use that stiffness
-		// about both local axes (conservative).
-		ei = [2]float64{emin, emin}
-		ec.Note = "section axes are not principal: the minor principal EI is used about both axes"
-	}
 	gas := [2]float64{p.mp.gasz, p.mp.gasy} // shear along z pairs with bending about y
 	ks := [2]float64{over.Y, over.Z}
 	var pcr [2]float64
@@ -325,33 +319,4 @@ func (nt *net) endFixity(x *elem, n NodeID, atA bool, k int, axis, defl [3]float
 		return EndFixed
 	}
 	return EndPinned
-}
-
-// principalMinEI returns E·I_min of a single-material member whose
-// section has a product of area (geometric axes not principal), and
-// whether it applies:
-//
-//	I_min = (Iy + Iz)/2 − √(((Iy − Iz)/2)² + Iyz²)
-//
-// (Gere & Goodno, Mechanics of Materials, principal axes).
-func principalMinEI(x *elem, mp *memberProps) (float64, bool) {
-	var sec sections.Section
-	switch x.kind {
-	case BarKind:
-		sec = x.bar.Section
-	case BeamKind:
-		sec = x.beam.Section
-	}
-	if sec == nil || len(mp.parts) != 1 {
-		return 0, false
-	}
-	if _, ok := sec.(sections.Composite); ok {
-		return 0, false
-	}
-	pr, err := sec.Properties()
-	if err != nil || !(pr.Iy > 0) || !(pr.Iz > 0) || math.Abs(pr.Iyz) <= 1e-9*math.Max(pr.Iy, pr.Iz) {
-		return 0, false
-	}
-	imin := (pr.Iy+pr.Iz)/2 - math.Hypot((pr.Iy-pr.Iz)/2, pr.Iyz)
-	return mp.parts[0].e * imin, true
 }

@@ -161,24 +161,29 @@ func prepare(m *Model, l materials.Level) (*net, error) {
 		var err error
 		switch e.kind {
 		case BarKind:
-			p.frame, err = element.NewFrame(m.nodes[e.a].at.arr(), m.nodes[e.b].at.arr(), [3]float64{}, 0)
+			if e.bar.Section == nil {
+				p.mp = memberProps{ea: e.bar.EA, lineMass: e.bar.LineMass}
+			} else {
+				p.mp, err = resolveMember(e.bar.Material, e.bar.Section, RawBeam{}, l, false)
+			}
 			if err == nil {
-				if e.bar.Section == nil {
-					p.mp = memberProps{ea: e.bar.EA, lineMass: e.bar.LineMass}
-				} else {
-					p.mp, err = resolveMember(e.bar.Material, e.bar.Section, RawBeam{}, l, false)
-				}
+				// A bar's section has no set orientation; rolling by the
+				// principal angle makes its local axes principal for the
+				// Euler check (its stiffness is axial only).
+				p.frame, err = element.NewFrame(m.nodes[e.a].at.arr(), m.nodes[e.b].at.arr(), [3]float64{}, p.mp.theta)
 			}
 			reach[e.a] |= Translations
 			reach[e.b] |= Translations
 		case BeamKind:
 			bm := e.beam
-			p.frame, err = element.NewFrame(m.nodes[e.a].at.arr(), m.nodes[e.b].at.arr(), bm.Up.arr(), bm.Roll)
+			p.mp, err = resolveMember(bm.Material, bm.Section, bm.Raw, l, bm.Timoshenko)
 			if err == nil {
-				p.mp, err = resolveMember(bm.Material, bm.Section, bm.Raw, l, bm.Timoshenko)
+				// Principal axes: a section with a product of area is
+				// rolled by its principal angle (memberSection).
+				p.frame, err = element.NewFrame(m.nodes[e.a].at.arr(), m.nodes[e.b].at.arr(), bm.Up.arr(), bm.Roll+p.mp.theta)
 			}
 			if err == nil {
-				p.bp, err = beamProps(bm, l)
+				p.bp = beamPropsOf(bm, &p.mp)
 			}
 			reach[e.a] |= Translations
 			reach[e.b] |= Translations

@@ -1,6 +1,8 @@
 package springnet
 
 import (
+	"math"
+
 	"github.com/trestle-go/trestle/materials"
 	"github.com/trestle-go/trestle/sections"
 	"github.com/trestle-go/trestle/springnet/element"
@@ -78,7 +80,13 @@ const (
 //
 // Local axes: x from a to b; z in the plane of x and Up (global Z when Up
 // is zero, global Y for a member along Z), y = z × x; then Roll [rad]
-// about x. Iy of the section is about local y.
+// about x. Iy of the section is about local y. A section with a product
+// of area (an angle: Props.Iyz ≠ 0) is taken about its principal axes:
+// the frame turns on by the principal angle θ (Props.Principal), so that
+// local y is the major axis (E·Imax) and local z the minor one (E·Imin),
+// and the beam deflects out of the plane of a load along a geometric
+// axis, as unsymmetric bending requires. Member forces are then reported
+// on the principal axes (MemberResult.Theta).
 //
 // Stiffness comes from Material and Section (a sections.Composite uses each
 // part's material), or, without a Section, from Raw. ReleaseA/B free end
@@ -114,6 +122,11 @@ type memberProps struct {
 	lineMass                     float64
 	polarMass                    float64 // ρ·(Iy+Iz) per length [kg·m]
 	area                         float64 // for stress; 0: unknown
+	// theta is the angle [rad] from the section's geometric y axis to the
+	// member's local y axis: the principal angle of a section with a
+	// product of area (an angle), else 0. The member's frame is rolled by
+	// it, so that eiy and eiz are principal (see principalSection).
+	theta float64
 	// parts for stress and utilisation: modulus and strength per part
 	parts []partStrength
 }
@@ -129,7 +142,7 @@ func resolveMember(mat materials.Material, sec sections.Section, raw RawBeam, l 
 		return memberProps{ea: raw.EA, eiy: raw.EIy, eiz: raw.EIz, gj: raw.GJ, gasy: raw.GAsY, gasz: raw.GAsZ,
 			lineMass: raw.LineMass, area: raw.A}, nil
 	}
-	p, err := sec.Properties()
+	p, theta, err := memberSection(sec)
 	if err != nil {
 		return memberProps{}, err
 	}
@@ -170,12 +183,79 @@ func resolveMember(mat materials.Material, sec sections.Section, raw RawBeam, l 
 	e := mat.E.At(l)
 	g := mat.ShearModulus(l)
 	mp = memberProps{ea: e * p.A, eiy: e * p.Iy, eiz: e * p.Iz, gj: g * p.J,
-		lineMass: mat.Density * p.A, polarMass: mat.Density * (p.Iy + p.Iz), area: p.A,
+		lineMass: mat.Density * p.A, polarMass: mat.Density * (p.Iy + p.Iz), area: p.A, theta: theta,
 		parts: []partStrength{{e: e, tens: mat.Yield, comp: mat.CompressiveStrength()}}}
 	if needShear {
 		mp.gasy, mp.gasz = g*p.AsY, g*p.AsZ
 	}
 	return mp, nil
+}
+
+// productTol is the size of a product of area, relative to Iy + Iz,
+// below which a section's geometric axes are taken as principal (round-off
+// of the properties of a symmetric shape).
+const productTol = 1e-9
+
+// memberSection returns the properties of sec in the member's local axes,
+// and the angle theta [rad] from the section's geometric y axis to the
+// local y axis. A single-material section with a product of area (an
+// angle) is taken about its principal axes (principalSection); every
+// other section about its geometric axes, with theta = 0. A composite's
+// parts carry no product of area; no composite shape has one.
+func memberSection(sec sections.Section) (sections.Props, float64, error) {
+	p, err := sec.Properties()
+	if err != nil {
+		return p, 0, err
+	}
+	if _, ok := sec.(sections.Composite); ok {
+		return p, 0, nil
+	}
+	if math.Abs(p.Iyz) <= productTol*(math.Abs(p.Iy)+math.Abs(p.Iz)) {
+		return p, 0, nil
+	}
+	q, theta := principalSection(p)
+	return q, theta, nil
+}
+
+// principalSection returns p about its principal axes and the angle theta
+// [rad] from the geometric y axis to the major principal axis, positive
+// from y towards z (Props.Principal):
+//
+//	Iy' = Imax,  Iz' = Imin,  Iy'z' = 0
+//	y' = y·cos θ + z·sin θ,   z' = −y·sin θ + z·cos θ
+//
+// (Gere & Goodno, Mechanics of Materials, principal axes). The outline is
+// rotated into (y', z'), CY, CZ, Sy, Sz, Ry, Rz follow from it; the shear
+// areas go with the geometric axis nearer each principal axis (a rotated
+// shear area has no single value; for an equal angle AsY = AsZ anyway).
+func principalSection(p sections.Props) (sections.Props, float64) {
+	imax, imin, theta := p.Principal()
+	c, s := math.Cos(theta), math.Sin(theta)
+	q := p
+	q.Iy, q.Iz, q.Iyz = imax, imin, 0
+	if math.Abs(s) > math.Abs(c) {
+		q.AsY, q.AsZ = p.AsZ, p.AsY
+	}
+	q.Outline = make([]sections.Loop, len(p.Outline))
+	cy, cz := 0.0, 0.0
+	for i, loop := range p.Outline {
+		out := make(sections.Loop, len(loop))
+		for j, pt := range loop {
+			y, z := pt[0]*c+pt[1]*s, -pt[0]*s+pt[1]*c
+			out[j] = [2]float64{y, z}
+			cy, cz = math.Max(cy, math.Abs(y)), math.Max(cz, math.Abs(z))
+		}
+		q.Outline[i] = out
+	}
+	q.CY, q.CZ, q.Sy, q.Sz = 0, 0, 0, 0
+	if cy > 0 && cz > 0 {
+		q.CY, q.CZ = cy, cz
+		q.Sy, q.Sz = q.Iy/cz, q.Iz/cy
+	}
+	if p.A > 0 {
+		q.Ry, q.Rz = math.Sqrt(q.Iy/p.A), math.Sqrt(q.Iz/p.A)
+	}
+	return q, theta
 }
 
 // stress returns the axial stress of the stiffest-strained part and the

@@ -11,7 +11,10 @@ import (
 // MemberResult holds the results of one bar or beam in one load case.
 //
 // Forces are in the member's local axes (x from end a to end b; see Beam),
-// in N and N·m; stresses in Pa. A and B are the section forces at the ends
+// in N and N·m; stresses in Pa. For a section with a product of area (an
+// angle) the local axes are its principal axes, turned by Theta from the
+// section's geometric axes: My is about the major axis, Mz about the
+// minor one. A and B are the section forces at the ends
 // on the face with outward normal +x (element.SectionForces: N tension
 // positive); Local holds the forces the nodes apply to the member ends in
 // the matrix convention (element.BeamForces.Local). For a bar only N is
@@ -35,6 +38,10 @@ type MemberResult struct {
 	Name    string
 	Kind    ElementKind // BarKind or BeamKind
 	Length  float64     // [m]
+	// Theta is the angle [rad] from the section's geometric y axis to the
+	// local y axis, positive towards z: the principal angle of a section
+	// with a product of area, else 0 (see Beam).
+	Theta float64
 
 	A, B  element.SectionForces
 	Local element.Vec12
@@ -191,7 +198,7 @@ func (c *CaseResult) member(e ElementID, s *MemberSettings, touch []int) MemberR
 	m := nt.m
 	x := &m.elems[e]
 	p := &nt.el[e]
-	r := MemberResult{Element: e, Name: x.name(), Kind: x.kind, Length: p.frame.L,
+	r := MemberResult{Element: e, Name: x.name(), Kind: x.kind, Length: p.frame.L, Theta: p.mp.theta,
 		frame: p.frame, bp: p.bp, ua: c.disp[x.a], ub: c.disp[x.b]}
 	ef := c.forces[e]
 	if x.kind == BeamKind {
@@ -255,7 +262,9 @@ func (r *MemberResult) fibreStresses(sec sections.Section, mp *memberProps) {
 	if sec == nil || len(mp.parts) == 0 || mp.ea <= 0 {
 		return
 	}
-	pr, err := sec.Properties()
+	// In the member's local axes: principal for a section with a product
+	// of area, whose outline is then rotated with them.
+	pr, theta, err := memberSection(sec)
 	if err != nil || !(pr.A > 0) {
 		return
 	}
@@ -264,7 +273,7 @@ func (r *MemberResult) fibreStresses(sec sections.Section, mp *memberProps) {
 		return
 	}
 	round := isRound(sec)
-	general := bending && pr.Iyz != 0 && len(pr.Outline) > 0 && len(mp.parts) == 1
+	general := bending && (theta != 0 || pr.Iyz != 0) && len(pr.Outline) > 0 && len(mp.parts) == 1
 	// Strain extremes at one station: axial strain ± bending strain.
 	strain := func(f element.SectionForces) (hi, lo float64) {
 		ax := f.N / mp.ea
@@ -275,7 +284,10 @@ func (r *MemberResult) fibreStresses(sec sections.Section, mp *memberProps) {
 			// Unsymmetric bending, ε(y, z) = ε₀ + a·z + b·y with
 			// a = (My·Iz + Mz·Iyz)/(E·D), b = −(Mz·Iy + My·Iyz)/(E·D),
 			// D = Iy·Iz − Iyz² (Gere & Goodno, Mechanics of Materials,
-			// unsymmetric bending), at the outline's corners.
+			// unsymmetric bending), at the outline's corners. In
+			// principal axes Iyz = 0 and this is σ = N/A + My·z/Iy −
+			// Mz·y/Iz; the bounding box (CY, CZ) of a rotated angle
+			// would overstate the extreme fibres.
 			e := mp.parts[0].e
 			d := pr.Iy*pr.Iz - pr.Iyz*pr.Iyz
 			ca := (f.My*pr.Iz + f.Mz*pr.Iyz) / (e * d)

@@ -366,11 +366,17 @@ func beamProps(bm *Beam, l materials.Level) (element.BeamProps, error) {
 	if err != nil {
 		return element.BeamProps{}, err
 	}
+	return beamPropsOf(bm, &mp), nil
+}
+
+// beamPropsOf returns the element stiffness data of beam bm with the
+// level-resolved properties mp (about the member's local, principal axes).
+func beamPropsOf(bm *Beam, mp *memberProps) element.BeamProps {
 	p := element.BeamProps{EA: mp.ea, EIy: mp.eiy, EIz: mp.eiz, GJ: mp.gj,
 		ReleaseA: bm.ReleaseA, ReleaseB: bm.ReleaseB,
 		RotSpringA: bm.SpringA.arr(), RotSpringB: bm.SpringB.arr()}
 	if bm.Timoshenko || bm.Section == nil {
 		p.GAsY, p.GAsZ = mp.gasy, mp.gasz
 	}
-	return p, nil
+	return p
 }
