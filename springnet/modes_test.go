@@ -319,3 +319,38 @@ func TestMachineMasses(t *testing.T) {
 		})
 	}
 }
+
+// Longitudinal modes of a uniform fixed–free rod of bars,
+//
+//	f_n = (2n − 1)/(4L) · √(E/ρ)
+//
+// (Blevins, Formulas for Natural Frequency and Mode Shape, Table 12-1
+// (longitudinal vibration of bars), fixed–free), with consistent and
+// lumped bar masses.
+func TestModesRodAxial(t *testing.T) {
+	const n, l = 40, 3.0
+	sec := sections.RoundTube{D: 0.05, T: 0.004}
+	mt := modeSteel()
+	for _, kind := range []springnet.MassMatrix{springnet.Consistent, springnet.Lumped} {
+		t.Run(kind.String(), func(t *testing.T) {
+			var m springnet.Model
+			prev := m.AddNode("", springnet.Vec{})
+			m.Fix(prev, springnet.AllDOF)
+			for i := 1; i <= n; i++ {
+				nd := m.AddNode("", springnet.Vec{X: l * float64(i) / n})
+				m.Fix(nd, springnet.UY|springnet.UZ)
+				m.AddBar(prev, nd, springnet.Bar{Material: mt, Section: sec})
+				prev = nd
+			}
+			r, err := springnet.Modes(&m, &springnet.ModeSettings{Count: 3, Mass: kind})
+			require.NoError(t, err)
+			c := math.Sqrt(mt.E.Nominal / mt.Density)
+			for i := 0; i < 3; i++ {
+				want := float64(2*i+1) / (4 * l) * c
+				assert.InEpsilon(t, want, r.Frequency(i), beamFE, "mode %d", i+1)
+				// The only energy is axial, in steel: ζ = η/2.
+				assert.InEpsilon(t, mt.Loss.Nominal/2, r.DampingRatio(i).Nominal, 1e-12)
+			}
+		})
+	}
+}
