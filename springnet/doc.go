@@ -67,6 +67,31 @@
 // follows the contact path exactly (see Tipping). System exports K, the
 // lumped mass and the loads (Matrix Market).
 //
+// # Members and buckling
+//
+// CaseResult.MemberForces and MemberCheck (MembersTo for all) give each
+// bar and beam's end forces in local axes, the section forces along it
+// with its self-weight (MemberResult.At), the extreme fibre stresses and
+// a utilisation: the larger of tension over Material.Yield and
+// compression over Material.CompressiveStrength(), per part of a
+// composite section. The utilisation is a stress ratio, not a code check:
+// no resistance or safety factors, no lateral-torsional or local
+// buckling, no interaction formula. Each member also gets an Euler check
+// on its own, P_cr = π²·E·I/(K·L)² about both local axes, with K from the
+// end conditions read from the model (releases, supports, rigid groups,
+// what else is attached) by the recommended design values of AISC 360
+// Commentary Table C-A-7.1 by default (MemberSettings: theoretical values,
+// per-member K, sway frames). Sections with a product of area (angles)
+// are taken about their principal axes (see Beam). Buckling solves the
+// whole frame, (K + λ·Kg)·φ = 0 with Kg from the axial forces of one case,
+// for the lowest load factors λ and their shapes; it finds sway of a whole
+// stand that no member check sees. It returns a *FewerFactorsError when
+// fewer positive factors exist than asked (with no result when there is
+// none: nothing is in compression). Both are linear, elastic model
+// results: imperfections, residual stress and plasticity lower real
+// capacities, so check members and stability against local codes and
+// licensed engineering practice.
+//
 // # Errors
 //
 // Errors start with "springnet:" and name the item. A free motion is a

@@ -92,6 +92,13 @@ const (
 // part's material), or, without a Section, from Raw. ReleaseA/B free end
 // rotations; SpringA/B put rotational springs [N·m/rad] about local x, y, z
 // between node and beam end (zero: rigid joint).
+//
+// Shear deformation adds E·h²/(4·κ·G·L²) of the bending deflection of a
+// cantilever of depth h (Timoshenko & Gere, Mechanics of Materials, shear
+// deflections): for steel (κ = 5/6, G = E/2.6) about 3 % at L/h = 5 and
+// 20 % at L/h = 2; far more for timber, whose G/E along the grain is near
+// 1/16 (Wood Handbook). Set Timoshenko below L/h ≈ 5–10, and always for
+// masonry and concrete piers (see MemberResult for more).
 type Beam struct {
 	Name       string
 	Material   materials.Material
