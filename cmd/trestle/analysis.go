@@ -120,15 +120,15 @@ func summarise(m *springnet.Model, res *springnet.StaticResult) ModelSummary {
 			s.Feet++
 		}
 	}
-	// The weight is what the floor and supports carry in the first plain
-	// case that has a vertical load.
+	// The floor load is what the floor and supports carry in the first
+	// plain case that has a vertical load.
 	for c := 0; c < res.NumCases(); c++ {
 		if m.IsCombination(springnet.CaseID(c)) {
 			continue
 		}
 		eq := res.Case(springnet.CaseID(c)).Equilibrium()
 		if eq.Reactions.FZ != 0 {
-			s.WeightN = eq.Reactions.FZ
+			s.FloorLoadN, s.FloorLoadCase = eq.Reactions.FZ, m.CaseName(springnet.CaseID(c))
 			break
 		}
 	}

@@ -263,7 +263,7 @@ func TestGenerateThenAnalyse(t *testing.T) {
 	assert.Equal(t, 4+2, rep.Summary.Feet, "2 × 3 legs, a foot each")
 	// The feet carry the machine and the frame: more than the machine's
 	// weight alone (400 kg × standard gravity).
-	assert.Greater(t, rep.Summary.WeightN, 400*9.80665)
+	assert.Greater(t, rep.Summary.FloorLoadN, 400*9.80665)
 	// Writing to standard output gives the same file.
 	s := trestle(t, "", "generate", "--legs", "2x3", "--width", "1.5m", "--depth", "600", "--height", "800",
 		"--section", "square-tube 50x3 mm", "--stretchers", "150", "--brace", "front,back,left,right", "--brace-pattern", "cross",

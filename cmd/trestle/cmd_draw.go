@@ -7,7 +7,6 @@ import (
 	"path/filepath"
 	"strings"
 
-	"github.com/trestle-go/trestle/materials"
 	"github.com/trestle-go/trestle/springnet"
 	"github.com/trestle-go/trestle/springnet/draw"
 )
@@ -78,13 +77,16 @@ func runDraw(e env) error {
 		`Draws the stand in FILE ("-": standard input; "demo": the built-in demo)
 in front, side, top and isometric views, with the deflection of one load
 case magnified over the unloaded outline and members coloured by
-utilisation, and writes it as SVG or PNG (by the extension of --out).
+utilisation (or, with --mode, a natural mode shape with members coloured
+by their share of its strain energy), and writes it as SVG or PNG (by
+the extension of --out).
 Feet, supports and mounts are marked and named; the legend states the
 magnification.`,
-		"trestle draw --out stand.svg stand.toml\ntrestle draw --case \"side push\" --out demo.png demo", e)
+		"trestle draw --out stand.svg stand.toml\ntrestle draw --case cutting --out demo.png demo\ntrestle draw --mode 1 --out sway.svg demo", e)
 	out := fl.String("out", "", "picture `file` to write (.svg or .png); required")
 	format := fl.String("format", "", "`svg` or png; default from the --out extension")
 	caseName := fl.String("case", "", "load case to show; default the first")
+	mode := fl.Int("mode", 0, "draw natural mode `N` (from 1) instead of a load case, coloured by strain-energy share")
 	scale := fl.Float64("scale", 0, "displacement magnification; 0 chooses one")
 	level := fl.String("level", "nominal", "material values: `low`, nominal or high")
 	pos, err := fl.parse(e.args)
@@ -114,6 +116,26 @@ magnification.`,
 	m, name, dyn, err := loadModel(pos[0], e.stdin)
 	if err != nil {
 		return err
+	}
+	if *mode < 0 || (*mode > 0 && *caseName != "") {
+		return fmt.Errorf("draw: --mode %d: give a mode number from 1, or --case, not both", *mode)
+	}
+	if *mode > 0 {
+		dyn.count = max(dyn.count, *mode)
+		res, mr, warn := modes(m, l, dyn, nil)
+		if res == nil {
+			return fmt.Errorf("%s: %s", name, join(warn))
+		}
+		if *mode > len(mr.Modes) {
+			return fmt.Errorf("draw: --mode %d: the model has %d modes", *mode, len(mr.Modes))
+		}
+		s := modeScene(m, name, res, *mode-1, mr.Modes[*mode-1])
+		s.Scale = *scale
+		if err := writeAtomic(*out, pos, func(w io.Writer) error { return writeScene(w, &s, fmtName) }); err != nil {
+			return err
+		}
+		fmt.Fprintf(e.stdout, "wrote %s (%s, mode %d at %s Hz)\n", *out, fmtName, *mode, num(mr.Modes[*mode-1].FrequencyHz))
+		return nil
 	}
 	a, err := analyse(m, name, l, dyn)
 	if err != nil {
@@ -156,4 +178,3 @@ func findCase(m *springnet.Model, name string) (springnet.CaseID, error) {
 	return 0, fmt.Errorf("no load case %q; the model has %s", name, strings.Join(names, ", "))
 }
 
-var _ = materials.Nominal

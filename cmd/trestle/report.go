@@ -53,8 +53,12 @@ func writeAnalysis(w io.Writer, r *AnalysisReport, u unitSystem) {
 	k, mo, f, s := u.stiffness(), u.motion(), u.force(), u.stress()
 	fmt.Fprintf(w, "trestle analysis: %s (material level %s)\n", r.Model, r.Level)
 	sm := r.Summary
-	fmt.Fprintf(w, "%d nodes, %d beams, %d bars, %d springs, %d feet, %d rigid groups, %d mounts, %d load cases; weight on the floor %s\n",
-		sm.Nodes, sm.Beams, sm.Bars, sm.Springs, sm.Feet, sm.Groups, sm.Mounts, sm.Cases, f.fu(sm.WeightN))
+	fmt.Fprintf(w, "%d nodes, %d beams, %d bars, %d springs, %d feet, %d rigid groups, %d mounts, %d load cases",
+		sm.Nodes, sm.Beams, sm.Bars, sm.Springs, sm.Feet, sm.Groups, sm.Mounts, sm.Cases)
+	if sm.FloorLoadCase != "" {
+		fmt.Fprintf(w, "; floor load %s in case %q", f.fu(sm.FloorLoadN), sm.FloorLoadCase)
+	}
+	fmt.Fprintln(w)
 
 	if len(r.Warnings) > 0 {
 		heading(w, "WARNINGS")

@@ -44,7 +44,8 @@ type ModelSummary struct {
 	Groups  int     `json:"rigid_groups"`
 	Mounts  int     `json:"mounts"`
 	Cases   int     `json:"cases"`
-	WeightN float64 `json:"weight_n"` // total weight carried by feet and supports in the first case with gravity; 0 if none
+	FloorLoadN float64 `json:"floor_load_n"` // vertical reaction of floor and supports in FloorLoadCase; 0 if none
+	FloorLoadCase string `json:"floor_load_case"` // the first plain load case with a vertical reaction
 }
 
 // Governing holds the numbers a designer reads first. Optional numbers are
