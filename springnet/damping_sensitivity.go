@@ -30,8 +30,9 @@ type Sensitivity struct {
 //	dC/dE_k = −2·U_k / E_k
 //
 // because K is linear in E_k and, with loads fixed, dC/dE_k = −uᵀ·(∂K/∂E_k)·u
-// (adjoint of the self-adjoint compliance; Haftka & Gürdal, Elements of
-// Structural Optimization, 3rd ed., §7.2). U_k is the strain energy
+// (the compliance is self-adjoint; Haftka & Gürdal, Elements of
+// Structural Optimization, 3rd ed., sensitivity analysis, section from
+// memory). U_k is the strain energy
 // stored in material k (StrainEnergies, parts of composite sections split
 // as for modal damping). Gravity loads do not depend on E, so they stay
 // fixed. Compression-only feet keep the contact state of the solution.

@@ -140,7 +140,7 @@ func TestDampingMeasuredLossOverrides(t *testing.T) {
 // Compliance sensitivity: for a load case C = fᵀu = 2U and, for a
 // material whose moduli are scaled by s, dC/ds = −2·U_k (the energy stored
 // in that material; Haftka & Gürdal, Elements of Structural Optimization,
-// compliance sensitivity). Checked against a central finite difference of
+// sensitivity of the compliance, from memory). Checked against a central finite difference of
 // C over the modulus of one material.
 func TestComplianceSensitivity(t *testing.T) {
 	const fx, fz = 800.0, -1500.0

@@ -139,7 +139,7 @@ func TestModesEffectiveMassSum(t *testing.T) {
 // A stand with no supports at all still has modes: six rigid-body modes
 // (flagged, at 0 Hz) and then its elastic ones, the same as the elastic
 // modes of the free-free beam, f = λ²/(2πL²)·√(EI/m), λ₁ = 4.73004074
-// (Blevins, Table 8-1, free-free beam).
+// (Blevins, Table 8-1, free-free beam; value from memory).
 func TestModesFreeFree(t *testing.T) {
 	sec := sections.RoundTube{D: 0.0603, T: 0.004}
 	p, err := sec.Properties()

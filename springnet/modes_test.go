@@ -33,7 +33,8 @@ func modeSteel() materials.Material {
 
 // A mass on four legs, free only vertically, is one DOF:
 // f = (1/2π)·√(k/m), k = 4·EA/L (any vibration text, e.g. Thomson &
-// Dahleh, Theory of Vibration with Applications, 5th ed., §2.1).
+// Dahleh, Theory of Vibration with Applications, 5th ed., §2.1, section
+// number from memory).
 func TestModesMassOnLegs(t *testing.T) {
 	for _, tc := range []struct {
 		name          string
@@ -101,8 +102,9 @@ func cantileverModel(n int, l float64, ends string, sec sections.Section) (*spri
 //	f_n = (λ_n² / 2π L²)·√(EI/m)
 //
 // with λ = βL = 1.87510407, 4.69409113, 7.85475744 for a cantilever
-// (Blevins, Formulas for Natural Frequency and Mode Shape, Table 8-1) and
-// λ = nπ for a simply supported beam (same table).
+// (Blevins, Formulas for Natural Frequency and Mode Shape, Table 8-1; the
+// digits past 1.8751, 4.6941, 7.8548 from memory) and λ = nπ for a simply
+// supported beam (same table).
 func TestModesBeamBending(t *testing.T) {
 	sec := sections.RoundTube{D: 0.0603, T: 0.004}
 	p, err := sec.Properties()
@@ -300,7 +302,8 @@ func TestMachineMasses(t *testing.T) {
 	ms, err := springnet.MachineBox(600, springnet.Vec{Z: 0.5}, springnet.Vec{X: 1, Y: 0.5, Z: 0.8}).Masses()
 	require.NoError(t, err)
 	require.Len(t, ms, 1)
-	// Solid cuboid: Jx = m(b² + c²)/12 (Meriam & Kraige, Dynamics, inertia table).
+	// Solid cuboid: Jx = m(b² + c²)/12 (Meriam & Kraige, Dynamics, table of
+	// mass moments of inertia; the formula as the task states it).
 	assert.InEpsilon(t, 600*(0.25+0.64)/12, ms[0].Inertia.X, 1e-12)
 	assert.InEpsilon(t, 600*(1+0.64)/12, ms[0].Inertia.Y, 1e-12)
 	assert.InEpsilon(t, 600*(1+0.25)/12, ms[0].Inertia.Z, 1e-12)
@@ -324,9 +327,10 @@ func TestMachineMasses(t *testing.T) {
 //
 //	f_n = (2n − 1)/(4L) · √(E/ρ)
 //
-// (Blevins, Formulas for Natural Frequency and Mode Shape, Table 12-1
-// (longitudinal vibration of bars), fixed–free), with consistent and
-// lumped bar masses.
+// (the classical fixed–free rod, e.g. Blevins, Formulas for Natural
+// Frequency and Mode Shape, longitudinal vibration of straight bars; the
+// table number is not quoted, from memory), with consistent and lumped bar
+// masses.
 func TestModesRodAxial(t *testing.T) {
 	const n, l = 40, 3.0
 	sec := sections.RoundTube{D: 0.05, T: 0.004}

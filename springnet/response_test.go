@@ -37,7 +37,7 @@ func oneDOF(ea, l, kg float64, eta materials.Range) (*springnet.Model, springnet
 
 // Single DOF, viscous equivalent damping ζ = η/2 (closed forms: Thomson &
 // Dahleh, Theory of Vibration with Applications, 5th ed., §3.1; Inman,
-// Engineering Vibration, 4th ed., §2.2):
+// Engineering Vibration, 4th ed., §2.2; section numbers from memory):
 //
 //	|H(ωₙ)| = 1/(2ζk),   H(0) = 1/k,
 //	peak at ωₙ·√(1 − 2ζ²) with |H| = 1/(2ζ·√(1 − ζ²)·k)
@@ -82,7 +82,8 @@ func TestResponseSingleDOF(t *testing.T) {
 
 // csolve solves the complex system a·x = b by Gaussian elimination with
 // partial pivoting (a small dense reference; Golub & Van Loan, Matrix
-// Computations, Algorithm 3.4.1).
+// Computations, Gaussian elimination with partial pivoting, §3.4;
+// section number from memory).
 func csolve(a [][]complex128, b []complex128) []complex128 {
 	n := len(b)
 	for k := 0; k < n; k++ {
