@@ -177,4 +177,3 @@ func findCase(m *springnet.Model, name string) (springnet.CaseID, error) {
 	}
 	return 0, fmt.Errorf("no load case %q; the model has %s", name, strings.Join(names, ", "))
 }
-

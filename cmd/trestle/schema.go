@@ -36,16 +36,16 @@ type AnalysisReport struct {
 
 // ModelSummary counts what the model holds.
 type ModelSummary struct {
-	Nodes   int     `json:"nodes"`
-	Bars    int     `json:"bars"`
-	Beams   int     `json:"beams"`
-	Springs int     `json:"springs"`
-	Feet    int     `json:"feet"`
-	Groups  int     `json:"rigid_groups"`
-	Mounts  int     `json:"mounts"`
-	Cases   int     `json:"cases"`
-	FloorLoadN float64 `json:"floor_load_n"` // vertical reaction of floor and supports in FloorLoadCase; 0 if none
-	FloorLoadCase string `json:"floor_load_case"` // the first plain load case with a vertical reaction
+	Nodes         int     `json:"nodes"`
+	Bars          int     `json:"bars"`
+	Beams         int     `json:"beams"`
+	Springs       int     `json:"springs"`
+	Feet          int     `json:"feet"`
+	Groups        int     `json:"rigid_groups"`
+	Mounts        int     `json:"mounts"`
+	Cases         int     `json:"cases"`
+	FloorLoadN    float64 `json:"floor_load_n"`    // vertical reaction of floor and supports in FloorLoadCase; 0 if none
+	FloorLoadCase string  `json:"floor_load_case"` // the first plain load case with a vertical reaction
 }
 
 // Governing holds the numbers a designer reads first. Optional numbers are
