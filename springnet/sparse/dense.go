@@ -43,9 +43,9 @@ const panelWidth = 32
 // part of the top k×k block) and the lower triangle of its trailing
 // (m−k)×(m−k) block ub (row-major). Afterwards f holds the unit lower
 // factor columns, d[:k] the pivots, and ub the Schur complement. w must hold at least max(panelWidth², k·panelWidth, (m−k)·k) values.
-// Each pivot j is checked by pc.checkPivot(c0+j, ·); an error stops the
+// Each pivot j is checked by pc.checkPivot(c0+j, ·, fw); an error stops the
 // factorisation.
-func partialLDLT(f, ub []float64, m, k int, d, w []float64, gw gemmPool, pc *Factor, c0 int) error {
+func partialLDLT(f, ub []float64, m, k int, d, w []float64, gw gemmPool, pc *Factor, fw *fworker, c0 int) error {
 	ld := k
 	for p0 := 0; p0 < k; p0 += panelWidth {
 		p1 := min(p0+panelWidth, k)
@@ -53,7 +53,7 @@ func partialLDLT(f, ub []float64, m, k int, d, w []float64, gw gemmPool, pc *Fac
 		// Diagonal block of the panel, unblocked (right-looking inside).
 		for j := p0; j < p1; j++ {
 			dj := f[j*ld+j]
-			if err := pc.checkPivot(c0+j, dj); err != nil {
+			if err := pc.checkPivot(c0+j, dj, fw); err != nil {
 				return err
 			}
 			d[j] = dj

@@ -108,18 +108,22 @@ type Factor struct {
 	child   []int
 	relptr  []int // rel[relptr[s]:relptr[s+1]]: positions in the parent's front
 	rel     []int // of s's update rows
-	front   []float64
-	stack   []float64
-	work    []float64
+	snodeOf []int // supernode of each column
+	// Parallel plan: taskOf[s] is the worker factorising s, or -1 for
+	// the top part (main); fdesc[s] is the first supernode of s's subtree;
+	// rootOff[r] is where worker subtree root r left its update matrix.
+	taskOf      []int
+	fdesc       []int
+	rootOff     []int
+	workers     []*fworker
+	main        *fworker
+	minParallel float64 // work threshold for going parallel (0: default)
 	gw      gemmPool
 	y       []float64
 	xblk    []float64 // SolveMany workspace
 	ok      bool
 	neg     int
 	pos     int
-	frontMx int
-	stackMx int
-	workMx  int
 }
 
 // Analyze computes the ordering and the symbolic factorisation of A:
@@ -257,21 +261,16 @@ func (f *Factor) analyzePerm(a *Matrix, perm0 []int) error {
 		_ = start
 	}
 
-	// Storage of L, relative indices, front offsets, workspace sizes.
+	// Storage of L, relative indices, front offsets.
 	f.lptr = make([]int, ns+1)
 	f.relptr = make([]int, ns+1)
 	f.fo = make([]int, len(pat.ci))
 	pos := make([]int, n)
-	f.frontMx = 0
-	maxWork := panelWidth * panelWidth
-	stackTop, stackMax := 0, 0
 	for s := 0; s < ns; s++ {
 		k := f.sfirst[s+1] - f.sfirst[s]
 		rows := f.srow[f.sptr[s]:f.sptr[s+1]]
 		m := len(rows)
 		f.lptr[s+1] = f.lptr[s] + m*k
-		f.frontMx = max(f.frontMx, (m-k)*(m-k))
-		maxWork = max(maxWork, k*panelWidth, (m-k)*k)
 		for t, i := range rows {
 			pos[i] = t
 		}
@@ -280,14 +279,6 @@ func (f *Factor) analyzePerm(a *Matrix, perm0 []int) error {
 				f.fo[p] = pos[pat.ci[p]]*k + pos[j]
 			}
 		}
-		for _, c := range f.child[f.cptr[s]:f.cptr[s+1]] {
-			cf := f.sfirst[c+1] - f.sfirst[c]
-			u := f.sptr[c+1] - f.sptr[c] - cf
-			stackTop -= u * u
-		}
-		u := m - k
-		stackTop += u * u
-		stackMax = max(stackMax, stackTop)
 	}
 	// Relative indices of each supernode's update rows in its parent.
 	for s := 0; s < ns; s++ {
@@ -308,8 +299,9 @@ func (f *Factor) analyzePerm(a *Matrix, perm0 []int) error {
 		}
 	}
 	// The numeric storage is allocated by the first Factorize.
-	f.lx, f.front, f.stack, f.work = nil, nil, nil, nil
-	f.stackMx, f.workMx = stackMax, maxWork
+	f.lx = nil
+	f.snodeOf = snodeOf
+	f.planTasks()
 	f.d = make([]float64, n)
 	f.y = make([]float64, n)
 	return nil
@@ -322,11 +314,15 @@ func (f *Factor) allocNumeric() {
 		return
 	}
 	f.lx = make([]float64, f.lptr[f.ns])
-	f.front = make([]float64, f.frontMx)
-	f.stack = make([]float64, f.stackMx)
-	f.work = make([]float64, f.workMx)
-	if f.gw == nil {
+	if len(f.gw) < max(1, len(f.workers)) {
 		f.gw = newGemmPool()
+		for len(f.gw) < len(f.workers) {
+			f.gw = append(f.gw, newGemmWork())
+		}
+	}
+	f.main.alloc(f.gw)
+	for t, w := range f.workers {
+		w.alloc(f.gw[t : t+1])
 	}
 }
 
@@ -371,63 +367,8 @@ func (f *Factor) Factorize(a *Matrix) error {
 			f.scale[j] = max(f.scale[j], v)
 		}
 	}
-	f.neg, f.pos = 0, 0
-	top := 0
-	for s := 0; s < f.ns; s++ {
-		c0, c1 := f.sfirst[s], f.sfirst[s+1]
-		k := c1 - c0
-		m := f.sptr[s+1] - f.sptr[s]
-		// L's block (m×k, row-major) is the front's first k columns; the
-		// rest of the front's lower triangle, the update matrix, is ub.
-		lx := f.lx[f.lptr[s]:f.lptr[s+1]]
-		clear(lx)
-		u := m - k
-		ub := f.front[:u*u]
-		for i := 0; i < u; i++ {
-			clear(ub[i*u : i*u+i+1])
-		}
-		// Assemble A's columns.
-		for p := f.cp[c0]; p < f.cp[c1]; p++ {
-			lx[f.fo[p]] += f.cx[p]
-		}
-		// Extend-add the children's update matrices (on top of the stack,
-		// last child on top).
-		ch := f.child[f.cptr[s]:f.cptr[s+1]]
-		for t := len(ch) - 1; t >= 0; t-- {
-			c := ch[t]
-			rel := f.rel[f.relptr[c]:f.relptr[c+1]]
-			uc := len(rel)
-			top -= uc * uc
-			upd := f.stack[top : top+uc*uc]
-			nl := 0 // rel[:nl] are pivot columns of s
-			for nl < uc && rel[nl] < k {
-				nl++
-			}
-			for i, ri := range rel {
-				src := upd[i*uc : i*uc+i+1]
-				dl := lx[ri*k:]
-				for j, v := range src[:min(i+1, nl)] {
-					dl[rel[j]] += v
-				}
-				if i >= nl {
-					du := ub[(ri-k)*u : (ri-k+1)*u]
-					for j := nl; j <= i; j++ {
-						du[rel[j]-k] += src[j]
-					}
-				}
-			}
-		}
-		// Partial factorisation with the pivot test on original diagonals.
-		if err := partialLDLT(lx, ub, m, k, f.d[c0:c1], f.work, f.gw, f, c0); err != nil {
-			return err
-		}
-		if u > 0 {
-			upd := f.stack[top : top+u*u]
-			for i := 0; i < u; i++ {
-				copy(upd[i*u:i*u+i+1], ub[i*u:i*u+i+1])
-			}
-			top += u * u
-		}
+	if err := f.factorNumeric(); err != nil {
+		return err
 	}
 	f.ok = true
 	return nil
@@ -435,7 +376,7 @@ func (f *Factor) Factorize(a *Matrix) error {
 
 // checkPivot applies the pivot test to pivot dj of column col (pivot
 // order) and counts its sign.
-func (f *Factor) checkPivot(col int, dj float64) error {
+func (f *Factor) checkPivot(col int, dj float64, w *fworker) error {
 	diag := 0.0
 	if q := f.cdiag[col]; q >= 0 {
 		diag = f.cx[q]
@@ -450,9 +391,9 @@ func (f *Factor) checkPivot(col int, dj float64) error {
 	case dj < 0 && f.opt.Mode == Cholesky:
 		return &PivotError{Col: f.perm[col], Pivot: dj, Diagonal: diag, Negative: true}
 	case dj < 0:
-		f.neg++
+		w.neg++
 	default:
-		f.pos++
+		w.pos++
 	}
 	return nil
 }
