@@ -45,6 +45,11 @@ func build(name string, c *Contents) (*File, error) {
 				if n, err := strconv.Unquote(sm[2]); err == nil {
 					line = b.lineOf(sm[1], n)
 				}
+			} else if sm := validateMass.FindStringSubmatch(msg); sm != nil {
+				// Masses are added in file order: mass i is c.Masses[i].
+				if i, err := strconv.Atoi(sm[1]); err == nil && i < len(c.Masses) {
+					line = c.Masses[i].Line
+				}
 			}
 			el.add(line, "%s", strings.TrimPrefix(msg, "springnet: "))
 		}

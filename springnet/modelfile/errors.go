@@ -143,3 +143,7 @@ func editDistance(a, b string) int {
 // validateItem finds the item a springnet validation message names:
 // `springnet: bar "B7": zero length` gives ("bar", "B7", "zero length").
 var validateItem = regexp.MustCompile(`^springnet: (node|bar|beam|spring|foot|group|mount|case|combination) ("(?:[^"\\]|\\.)*")`)
+
+// validateMass finds the mass a springnet validation message names:
+// `springnet: mass 2 at node "B1": ...`.
+var validateMass = regexp.MustCompile(`^springnet: mass (\d+) at `)

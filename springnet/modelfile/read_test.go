@@ -311,6 +311,11 @@ fix = ["x", "zz"]
 from = "steel S235"
 E = ["210 GPa", "200 GPa", "190 GPa"]
 `, 3, `low <= nominal <= high`},
+		{"overflow after the unit", head + `[[mass]]
+on = "C3"
+mass = 5
+offset = [0, 0, "1e308 km"]
+`, 10, `is too large`},
 		{"inertia products", head + `[[mass]]
 on = "B1"
 mass = 10
@@ -369,6 +374,23 @@ gravity = "yes"
 			assert.True(t, found, "want %q in\n%v", tc.want, err)
 		})
 	}
+}
+
+// TestBuildMapsValidateErrors: Build maps the model's Validate messages
+// back to the lines of the Contents items, masses by their order.
+func TestBuildMapsValidateErrors(t *testing.T) {
+	c := &modelfile.Contents{
+		Nodes:    []modelfile.Node{{Name: "A", Line: 3}, {Name: "B", At: springnet.Vec{Z: 1}, Line: 4}},
+		Members:  []modelfile.Member{{Kind: springnet.BarKind, Name: "tie", A: "A", B: "B", Raw: springnet.RawBeam{EA: 1e6}, Line: 5}},
+		Supports: []modelfile.Support{{At: "A", Fix: springnet.AllDOF, Line: 6}},
+		Masses:   []modelfile.Mass{{On: "B", Kg: 1, Line: 7}, {On: "B", Kg: -2, Line: 9}},
+	}
+	_, err := modelfile.Build("built.toml", c)
+	require.Error(t, err)
+	errs := modelfile.Errors(err)
+	require.Len(t, errs, 1, "%v", err)
+	assert.Equal(t, 9, errs[0].Line)
+	assert.Contains(t, errs[0].Msg, "not a finite non-negative mass")
 }
 
 // TestErrorsAllReported checks that Read reports every problem, not just

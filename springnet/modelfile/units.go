@@ -340,17 +340,21 @@ func parseValue(text string, q quantity, def scale) (float64, error) {
 	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
 		return 0, fmt.Errorf("%q is not a finite number", numTxt)
 	}
-	if unitTxt == "" {
-		return def.toSI(v), nil
+	s := def
+	if unitTxt != "" {
+		var err error
+		if s, err = parseUnit(unitTxt); err != nil {
+			return 0, err
+		}
+		if s.d != quantityInfo[q].d {
+			return 0, fmt.Errorf("%q is not a %s", text, quantityInfo[q].word)
+		}
 	}
-	s, err := parseUnit(unitTxt)
-	if err != nil {
-		return 0, err
+	si := s.toSI(v)
+	if math.IsInf(si, 0) || math.IsNaN(si) {
+		return 0, fmt.Errorf("%q is too large once converted to SI units", text)
 	}
-	if s.d != quantityInfo[q].d {
-		return 0, fmt.Errorf("%q is not a %s", text, quantityInfo[q].word)
-	}
-	return s.toSI(v), nil
+	return si, nil
 }
 
 // formatIn writes the SI value v in the unit s as the shortest decimal

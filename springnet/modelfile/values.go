@@ -166,6 +166,14 @@ func (t *tab) integer(key string, lo, hi int64) (int, bool) {
 }
 
 func (r *reader) value(v any, q quantity) (float64, error) {
+	x, err := r.rawValue(v, q)
+	if err == nil && (math.IsInf(x, 0) || math.IsNaN(x)) {
+		return 0, fmt.Errorf("%v is too large once converted to SI units", v)
+	}
+	return x, err
+}
+
+func (r *reader) rawValue(v any, q quantity) (float64, error) {
 	switch v := v.(type) {
 	case int64:
 		return r.sc[q].toSI(float64(v)), nil
