@@ -61,9 +61,24 @@
 //
 // Dense and DenseBuckling solve small problems with gonum: Cholesky
 // reduction to a standard symmetric problem and mat.EigenSym. Dense reduces
-// with the Cholesky factor of M when M is positive definite; when M is
-// singular (massless DOF) it reduces with the factor of K − σM instead and
-// drops the infinite eigenvalues.
+// with the Cholesky factor of M when M is positive definite. When M has
+// zero rows (massless DOF) it condenses those DOF statically first; for any
+// other singular M it reduces with the factor of K − σM and drops the
+// infinite eigenvalues (accurate for the lower modes only).
+//
+// # Factorisations
+//
+// The shifted matrices are factorised by sparse.Factor in LDLT mode
+// (without pivoting), all on the union of the patterns of K and M (or Kg),
+// so one symbolic analysis serves every shift. Each factorisation is
+// checked by the normwise backward error of a test solve and each Lanczos
+// solve by its own backward error (one step of iterative refinement when
+// it exceeds 1e-14); a poor one moves the shift or fails.
+//
+// With Settings.Shift inside the spectrum Lowest returns the n eigenvalues
+// nearest it, and the Sturm check counts the interval around the shift that
+// holds every eigenvalue at most as far from it as the returned ones
+// (Result.SturmLow, Result.SturmShift).
 //
 // # Accuracy and errors
 //
