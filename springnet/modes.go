@@ -164,6 +164,17 @@ func Modes(m *Model, s *ModeSettings) (*ModeResult, error) {
 	}
 	var few *eigen.FewerModesError
 	var sing *eigen.SingularError
+	if dense && err != nil && !errors.As(err, &few) {
+		// The dense solver does not say which DOF failed; the sparse
+		// factorisation of K − σM below zero does.
+		scale := matTrace(r.k) / trM
+		if !(scale > 0) {
+			scale = 1
+		}
+		if _, cerr := eigen.CountBelow(r.k, r.mm, -eigen.DefaultShiftFraction*scale); errors.As(cerr, &sing) {
+			err = cerr
+		}
+	}
 	switch {
 	case errors.As(err, &few) && er != nil && er.Len() > 0:
 		// keep the result and report the shortfall below

@@ -173,12 +173,25 @@ func TestModesFreeFree(t *testing.T) {
 func TestModesMasslessMechanism(t *testing.T) {
 	var m springnet.Model
 	a := m.AddNode("ground", springnet.Vec{})
-	b := m.AddNode("tip", springnet.Vec{X: 1})
+	b := m.AddNode("mid", springnet.Vec{X: 1})
+	c := m.AddNode("tip", springnet.Vec{X: 2})
 	m.Fix(a, springnet.AllDOF)
 	m.Fix(b, springnet.UZ)
+	m.Fix(c, springnet.UZ)
 	m.AddSpring(a, b, springnet.Spring{K: springnet.Stiffness6{X: 1e6}})
-	m.AddMass(b, springnet.Mass{Kg: 0})
-	_, err := springnet.Modes(&m, nil)
-	require.Error(t, err)
-	assert.Contains(t, err.Error(), "springnet: modes")
+	m.AddSpring(b, c, springnet.Spring{K: springnet.Stiffness6{X: 1e6}})
+	m.AddMass(c, springnet.Mass{Kg: 10})
+	for _, method := range []springnet.ModeMethod{springnet.SparseMethod, springnet.DenseMethod} {
+		_, err := springnet.Modes(&m, &springnet.ModeSettings{Count: 1, Method: method})
+		require.Error(t, err)
+		assert.Contains(t, err.Error(), "springnet: modes")
+		assert.Contains(t, err.Error(), `node "mid" UY`)
+	}
+	var empty springnet.Model
+	e := empty.AddNode("e", springnet.Vec{})
+	f := empty.AddNode("f", springnet.Vec{X: 1})
+	empty.Fix(e, springnet.AllDOF)
+	empty.AddBar(e, f, springnet.Bar{EA: 1e6})
+	_, err := springnet.Modes(&empty, nil)
+	assert.ErrorContains(t, err, "no mass")
 }
