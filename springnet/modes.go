@@ -408,8 +408,8 @@ func (r *ModeResult) ShapesTo(dst []Displacement, i int) []Displacement {
 }
 
 // ModalShape returns the motion of place p in mode i with the mode scaled
-// to unit modal mass (φᵀ·M·φ = 1 kg·m²-consistent units: m/√kg and
-// rad/√kg), the scale the receptance sums use.
+// to unit modal mass, φᵀ·M·φ = 1 (a translation in m per √kg of modal
+// mass), the scale the receptance sums use: φ_j·φ_k/ω² is a compliance.
 func (r *ModeResult) ModalShape(i int, p Place) Displacement {
 	r.nt.m.checkPlace(p)
 	o, at := r.nt.dm.placeOwner(r.nt.m, p)
