@@ -180,7 +180,9 @@ func TestJSONRoundTrip(t *testing.T) {
 }
 
 func TestDemoEndToEnd(t *testing.T) {
-	// The README's main-job command: go run ./cmd/trestle demo.
+	// The README's main-job command: go run ./cmd/trestle demo. It needs
+	// no file: run it from an empty folder.
+	t.Chdir(t.TempDir())
 	r := trestle(t, "", "demo")
 	require.NoError(t, r.err)
 	for _, want := range []string{"GOVERNING NUMBERS", "softest mount stiffness", "N/µm", "headstock", "tailstock",
