@@ -87,6 +87,16 @@ func TestDampingCompositeSplit(t *testing.T) {
 			m, _ := cantileverModel(10, 1.5, "clamped-free", sec)
 			r, err := springnet.Modes(m, &springnet.ModeSettings{Count: 1})
 			require.NoError(t, err)
+			// Transformed section for the frequency (Blevins, Table 8-1,
+			// cantilever λ₁ = 1.8751): EI = Σ Eₚ·Iₚ over the parts with
+			// stiffness, m = Σ ρₚ·Aₚ over all parts (sand adds mass only).
+			ei := steel.E.Nominal * parts[0].Iy
+			if !tc.fill.MassOnly {
+				ei += tc.fill.E.Nominal * parts[1].Iy
+			}
+			lineMass := steel.Density*parts[0].A + tc.fill.Density*parts[1].A
+			f1 := 1.87510407 * 1.87510407 / (2 * math.Pi * 1.5 * 1.5) * math.Sqrt(ei/lineMass)
+			assert.InEpsilon(t, f1, r.Frequency(0), beamFE)
 			us := steel.E.Nominal * parts[0].Iy
 			uc := 0.0
 			if !tc.fill.MassOnly {
