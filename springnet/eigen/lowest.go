@@ -71,6 +71,7 @@ func Lowest(K, M *sparse.Matrix, n int, s *Settings) (*Result, error) {
 		admissible: func(float64) bool { return true },
 		alpha:      func(l float64) float64 { return -l },
 		scale:      scale,
+		zero:       st.RigidTol * scale,
 	}
 	pb.toLambda = func(t float64) float64 { return pb.shift + 1/t }
 	// Factorise at σ; factorAt moves the shift when K − σM is singular

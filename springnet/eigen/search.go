@@ -34,6 +34,11 @@ type problem struct {
 	below int
 	// scale is the eigenvalue scale, used for gaps and rigid flags.
 	scale float64
+	// zero is the size below which an eigenvalue counts as zero (rigid
+	// body); the Sturm shift keeps at least that distance, so that a
+	// rigid-body eigenvalue computed as a tiny negative number is still
+	// counted with its exact value 0.
+	zero float64
 }
 
 // maxContinuations bounds the restarts of the search after a Sturm check
@@ -180,7 +185,7 @@ func (pb *problem) check(all []pair, lo, hi float64) (sturm, error) {
 	// σ₂: above hi by a margin, but below the next converged eigenvalue
 	// that is clearly separate; an eigenvalue closer than the margin joins
 	// the interval.
-	delta := sturmMargin * math.Max(hi-pb.shift, math.Abs(hi))
+	delta := math.Max(sturmMargin*math.Max(hi-pb.shift, math.Abs(hi)), pb.zero)
 	if delta == 0 {
 		delta = sturmMargin * pb.scale
 	}
