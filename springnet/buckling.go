@@ -66,6 +66,14 @@ type BucklingResult struct {
 // *ConditionError. A buckling factor is a model result: check stability
 // against local codes and licensed engineering practice.
 func Buckling(m *Model, c CaseID, s *BucklingSettings) (*BucklingResult, error) {
+	var sv Solver
+	return sv.Buckling(m, c, s)
+}
+
+// Buckling is the package function Buckling with the static solution of
+// case c solved by sv (which keeps its symbolic analysis for the next
+// level or case); the eigenproblem has its own factorisation.
+func (sv *Solver) Buckling(m *Model, c CaseID, s *BucklingSettings) (*BucklingResult, error) {
 	if s == nil {
 		s = &BucklingSettings{}
 	}
@@ -92,7 +100,6 @@ func Buckling(m *Model, c CaseID, s *BucklingSettings) (*BucklingResult, error) 
 	if err != nil {
 		return nil, err
 	}
-	var sv Solver
 	var co []int
 	for i := range m.elems {
 		if m.elems[i].kind == FootKind && m.elems[i].foot.CompressionOnly {

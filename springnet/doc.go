@@ -65,7 +65,11 @@
 // entering and leaving contact, refactorises only). Compression-only feet
 // are solved by an active-set loop of linear solves; the tipping margin
 // follows the contact path exactly (see Tipping). System exports K, the
-// lumped mass and the loads (Matrix Market).
+// lumped mass and the loads (Matrix Market). Sweep runs the statics, the
+// mount stiffness at every mount and, if asked, buckling at the Low,
+// Nominal and High material levels with one Solver and returns each
+// governing number as a Spread: its value per level and its min–max
+// range (not assumed monotone in E).
 //
 // # Members and buckling
 //

@@ -98,3 +98,46 @@ func ExampleStatic() {
 	// F3: 500.7 N (0.128)
 	// tips at 2.043 × the push
 }
+
+// A timber stand on rubber pads: the governing numbers as ranges over the
+// material uncertainty (timber E and the pads' stiffness spread), from
+// one Solver.
+func ExampleSweep() {
+	const mm = 1e-3
+	timber, err := materials.Lookup("timber C24")
+	if err != nil {
+		log.Fatal(err)
+	}
+	leg := sections.Rect{B: 90 * mm, H: 90 * mm}
+	const w, d, h = 0.8, 0.6, 0.7 // footprint and height [m] (demo data)
+	var m springnet.Model
+	var tops []springnet.NodeID
+	for _, c := range [4][2]float64{{0, 0}, {w, 0}, {w, d}, {0, d}} {
+		foot := m.AddNode("", springnet.Vec{X: c[0], Y: c[1]})
+		top := m.AddNode("", springnet.Vec{X: c[0], Y: c[1], Z: h})
+		m.AddBeam(foot, top, springnet.Beam{Material: timber, Section: leg})
+		// A rubber pad (demo stiffnesses, ±30 % spread).
+		m.AddFoot(foot, springnet.Foot{K: springnet.Stiffness6{X: 5e6, Y: 5e6, Z: 5e7},
+			Vary: materials.Range{Low: 0.7, Nominal: 1, High: 1.3}})
+		tops = append(tops, top)
+	}
+	plate := m.AddRigidGroup("top", tops...)
+	m.AddMount("spindle", springnet.Vec{X: w / 2, Y: d / 2, Z: h + 0.1}, plate)
+	m.AddLoad(plate, springnet.Load{FZ: -3e3, FX: 200})
+
+	res, err := springnet.Sweep(&m, &springnet.SweepSettings{Buckling: true})
+	if err != nil {
+		log.Fatal(err)
+	}
+	k := res.Mounts[0].Softest.Range
+	fmt.Printf("softest at spindle: %.4g / %.4g / %.4g N/µm\n",
+		springnet.NPerMicron(k.Low), springnet.NPerMicron(k.Nominal), springnet.NPerMicron(k.High))
+	u := res.MaxUtilisation.Range
+	fmt.Printf("utilisation: %.4g / %.4g / %.4g\n", u.Low, u.Nominal, u.High)
+	b := res.Buckling.Range
+	fmt.Printf("buckling factor: %.4g / %.4g / %.4g\n", b.Low, b.Nominal, b.High)
+	// Output:
+	// softest at spindle: 1.177 / 1.74 / 2.305 N/µm
+	// utilisation: 0.01864 / 0.01864 / 0.01864
+	// buckling factor: 242.9 / 360.8 / 479.2
+}

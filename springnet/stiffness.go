@@ -55,6 +55,13 @@ func (s *Solver) MountStiffness(m *Model, p Place, st *StaticSettings) (*PointSt
 	if err := s.factor(nt); err != nil {
 		return nil, err
 	}
+	return s.pointStiffness(nt, p)
+}
+
+// pointStiffness returns the stiffness at p of the prepared model nt,
+// whose K the Solver has just factorised (every foot in contact).
+func (s *Solver) pointStiffness(nt *net, p Place) (*PointStiffness, error) {
+	m := nt.m
 	d := &nt.dm
 	o, at := d.placeOwner(m, p)
 	ps := &PointStiffness{name: m.PlaceName(p)}

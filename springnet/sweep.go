@@ -1,0 +1,232 @@
+package springnet
+
+import (
+	"errors"
+	"fmt"
+	"math"
+
+	"github.com/trestle-go/trestle/materials"
+)
+
+// SweepSettings controls Sweep. A nil *SweepSettings means defaults; zero
+// fields mean defaults.
+type SweepSettings struct {
+	// Places are where mount stiffness is measured (NodeID, GroupID or
+	// MountID); nil means every mount of the model, in mount order, and
+	// an empty slice none.
+	Places []Place
+	// Member chooses the effective-length factors of the member checks
+	// (MembersTo); nil: defaults. Utilisation does not depend on it.
+	Member *MemberSettings
+	// Buckling also runs the whole-frame buckling analysis (Buckling)
+	// of every case at every level and reports the lowest positive load
+	// factor.
+	Buckling bool
+}
+
+// Spread is one governing number over the material levels.
+//
+// ByLevel holds its value at each level in the order of materials.Levels
+// (Low, Nominal, High material values). Range is the spread of those
+// values: Range.Low the smallest, Range.High the largest, Range.Nominal
+// the value at Nominal. A stiffness rises with E, so its smallest value
+// is at the Low level, but a displacement falls, and a utilisation or a
+// buckling factor of a statically indeterminate stand (where stiffer
+// parts draw more load) can move either way or not at all; Range is
+// therefore the min and max over the three levels, not the values at the
+// Low and High levels. Design to the worse end of Range.
+type Spread struct {
+	ByLevel [3]float64
+	Range   materials.Range
+}
+
+// At returns the value at level l.
+func (s Spread) At(l materials.Level) float64 {
+	for i, v := range materials.Levels {
+		if v == l {
+			return s.ByLevel[i]
+		}
+	}
+	panic(fmt.Sprintf("springnet: Spread.At: unknown level %v", l))
+}
+
+// spreadOf builds a Spread from values in materials.Levels order.
+func spreadOf(v [3]float64) Spread {
+	s := Spread{ByLevel: v, Range: materials.Range{Low: v[0], High: v[0]}}
+	for i, l := range materials.Levels {
+		s.Range.Low = math.Min(s.Range.Low, v[i])
+		s.Range.High = math.Max(s.Range.High, v[i])
+		if l == materials.Nominal {
+			s.Range.Nominal = v[i]
+		}
+	}
+	return s
+}
+
+// MountSpread is the stiffness at one place over the material levels.
+type MountSpread struct {
+	Place   Place
+	Name    string // as Model.PlaceName
+	X, Y, Z Spread // stiffness along global X, Y, Z (PointStiffness.Along) [N/m]
+	// Softest is the smallest principal translational stiffness
+	// (PointStiffness.Principal) [N/m]; its direction may turn from
+	// level to level (see Points).
+	Softest Spread
+	// Points holds the full results per level, in materials.Levels order.
+	Points [3]*PointStiffness
+}
+
+// SweepResult holds the results of Sweep: the governing numbers of the
+// stand with every material and spring at the Low, Nominal and High end
+// of its range.
+type SweepResult struct {
+	// Static holds the static results per level, in materials.Levels
+	// order.
+	Static [3]*StaticResult
+	// Mounts holds the stiffness at each place of SweepSettings.Places.
+	Mounts []MountSpread
+	// MaxDisplacement is the largest translation |u| of any node in any
+	// case [m].
+	MaxDisplacement Spread
+	// MaxUtilisation is the largest member utilisation (a stress ratio,
+	// MemberResult.Utilisation) of any bar or beam in any case; 0 where
+	// no member has a rated strength.
+	MaxUtilisation Spread
+	// Buckling is the lowest positive whole-frame buckling load factor
+	// over the cases; it is set only when Buckled is true.
+	Buckling Spread
+	// Buckled is true when buckling was asked for (SweepSettings.Buckling)
+	// and some case has a positive load factor at every level.
+	Buckled bool
+}
+
+// Sweep analyses m at each material level (materials.Levels: every
+// material's E and G and every spring's and foot's Vary at the Low,
+// Nominal and High end of its range) with the one Solver s, so the
+// symbolic analysis of K is done once and each level only refactorises:
+// Static (every case), the mount stiffness at each place (one
+// factorisation per level for all places, every foot in contact, as in
+// MountStiffness) and, if asked, Buckling of every case. It returns the
+// governing numbers as Spreads.
+//
+// Errors are those of the analyses, wrapped with the level; no result is
+// returned then. A solve whose residual exceeds MaxResidual gives the
+// result with the worst *ConditionError. A case in which nothing is in
+// compression has no buckling factor and is skipped. These are model
+// results over the stated material ranges: check members and stability
+// against local codes and licensed engineering practice.
+func (s *Solver) Sweep(m *Model, st *SweepSettings) (*SweepResult, error) {
+	if st == nil {
+		st = &SweepSettings{}
+	}
+	places := st.Places
+	if places == nil {
+		for i := range m.mounts {
+			places = append(places, MountID(i))
+		}
+	}
+	for _, p := range places {
+		m.checkPlace(p)
+	}
+	res := &SweepResult{Mounts: make([]MountSpread, len(places))}
+	var worst *ConditionError
+	keep := func(err error) error {
+		var ce *ConditionError
+		if errors.As(err, &ce) {
+			if worst == nil || ce.Residual > worst.Residual {
+				worst = ce
+			}
+			return nil
+		}
+		return err
+	}
+	var disp, util, buck [3]float64
+	var mr []MemberResult
+	buckled := st.Buckling
+	for li, l := range materials.Levels {
+		wrap := func(err error) error {
+			return fmt.Errorf("springnet: sweep at %v material values: %w", l, err)
+		}
+		sr, err := s.Static(m, &StaticSettings{Level: l})
+		if err = keep(err); err != nil {
+			return nil, wrap(err)
+		}
+		res.Static[li] = sr
+		for _, cr := range sr.cases {
+			for n := range m.nodes {
+				disp[li] = math.Max(disp[li], cr.Displacement(NodeID(n)).Translation().Norm())
+			}
+			if mr, err = cr.MembersTo(mr, st.Member); err != nil {
+				return nil, wrap(err)
+			}
+			for i := range mr {
+				util[li] = math.Max(util[li], mr[i].Utilisation)
+			}
+		}
+
+		if len(places) > 0 {
+			// Static may leave compression-only feet lifted: prepare
+			// afresh (every foot in contact) and factorise once for all
+			// places. The pattern is the same, so this refactorises only.
+			nt, err := prepare(m, l)
+			if err != nil {
+				return nil, wrap(err)
+			}
+			if err := s.factor(nt); err != nil {
+				return nil, wrap(err)
+			}
+			for pi, p := range places {
+				ps, err := s.pointStiffness(nt, p)
+				if err = keep(err); err != nil {
+					return nil, wrap(err)
+				}
+				ms := &res.Mounts[pi]
+				ms.Points[li] = ps
+			}
+		}
+
+		if st.Buckling {
+			found := false
+			for c := range m.cases {
+				br, err := s.Buckling(m, CaseID(c), &BucklingSettings{Modes: 1, Level: l})
+				var few *FewerFactorsError
+				if errors.As(err, &few) && br == nil {
+					continue // nothing in compression under this case
+				}
+				if err = keep(err); err != nil {
+					return nil, wrap(err)
+				}
+				if f := br.Factor(0); !found || f < buck[li] {
+					buck[li], found = f, true
+				}
+			}
+			buckled = buckled && found
+		}
+	}
+	res.MaxDisplacement = spreadOf(disp)
+	res.MaxUtilisation = spreadOf(util)
+	if buckled {
+		res.Buckling, res.Buckled = spreadOf(buck), true
+	}
+	for pi, p := range places {
+		ms := &res.Mounts[pi]
+		ms.Place, ms.Name = p, m.PlaceName(p)
+		var kx, ky, kz, soft [3]float64
+		for li, ps := range ms.Points {
+			kx[li], ky[li], kz[li] = ps.Along(Vec{X: 1}), ps.Along(Vec{Y: 1}), ps.Along(Vec{Z: 1})
+			k, _ := ps.Principal()
+			soft[li] = k[0]
+		}
+		ms.X, ms.Y, ms.Z, ms.Softest = spreadOf(kx), spreadOf(ky), spreadOf(kz), spreadOf(soft)
+	}
+	if worst != nil {
+		return res, worst
+	}
+	return res, nil
+}
+
+// Sweep is Solver.Sweep with a new Solver.
+func Sweep(m *Model, st *SweepSettings) (*SweepResult, error) {
+	var s Solver
+	return s.Sweep(m, st)
+}
