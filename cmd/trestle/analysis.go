@@ -142,11 +142,36 @@ func mountReport(ps *springnet.PointStiffness) MountStiffness {
 		YNPerM:         ps.Along(springnet.Vec{Y: 1}),
 		ZNPerM:         ps.Along(springnet.Vec{Z: 1}),
 		PrincipalNPerM: k}
+	// Equal softest stiffnesses (a symmetric stand) leave the direction
+	// within their plane arbitrary: report the global axis in that plane
+	// (the one least along the stiffest direction), so that the same
+	// model prints the same direction on every machine.
+	if k[1]-k[0] <= tieTol*math.Abs(k[1]) {
+		mr.SoftestTied = true
+		axes := [3]springnet.Vec{{X: 1}, {Y: 1}, {Z: 1}}
+		best := 0
+		for i := 1; i < 3; i++ {
+			if math.Abs(axes[i].Dot(dir[2])) < math.Abs(axes[best].Dot(dir[2]))-tieTol {
+				best = i
+			}
+		}
+		a := axes[best]
+		// Remove any part along the stiffest direction, then complete the
+		// right-handed set.
+		a = a.Sub(dir[2].Scale(a.Dot(dir[2])))
+		a = a.Scale(1 / a.Norm())
+		dir[0], dir[1] = a, dir[2].Cross(a)
+	}
 	for i := range dir {
 		mr.PrincipalDirection[i] = [3]float64{clean(dir[i].X), clean(dir[i].Y), clean(dir[i].Z)}
 	}
 	return mr
 }
+
+// tieTol is the relative difference under which two principal
+// stiffnesses are taken as equal (far above the solve's round-off, far
+// below any difference a designer acts on).
+const tieTol = 1e-6
 
 // roundOff is the relative size below which a result is taken as
 // round-off of the double-precision solve and printed as zero.

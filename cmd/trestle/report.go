@@ -71,7 +71,13 @@ func writeAnalysis(w io.Writer, r *AnalysisReport, u unitSystem) {
 	heading(w, "GOVERNING NUMBERS")
 	tw := table(w)
 	if g.SoftestMount != "" {
-		fmt.Fprintf(tw, "  softest mount stiffness\t%s\tat %s, along %s\n", k.fu(g.SoftestStiffnessNPerM), g.SoftestMount, direction(g.SoftestDirection))
+		tied := ""
+		for _, mt := range r.Mounts {
+			if mt.Name == g.SoftestMount && mt.SoftestTied {
+				tied = fmt.Sprintf(" (as soft along %s)", direction(mt.PrincipalDirection[1]))
+			}
+		}
+		fmt.Fprintf(tw, "  softest mount stiffness\t%s\tat %s, along %s%s\n", k.fu(g.SoftestStiffnessNPerM), g.SoftestMount, direction(g.SoftestDirection), tied)
 	} else {
 		fmt.Fprintf(tw, "  softest mount stiffness\t—\tno mounts or rigid groups in the model\n")
 	}
@@ -114,8 +120,12 @@ func writeAnalysis(w io.Writer, r *AnalysisReport, u unitSystem) {
 		tw = table(w)
 		fmt.Fprintf(tw, "  mount\tX\tY\tZ\tsoftest\talong\tstiffest\talong\n")
 		for _, mt := range r.Mounts {
+			along := direction(mt.PrincipalDirection[0])
+			if mt.SoftestTied {
+				along += " = " + direction(mt.PrincipalDirection[1])
+			}
 			fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n", mt.Name, k.f(mt.XNPerM), k.f(mt.YNPerM), k.f(mt.ZNPerM),
-				k.f(mt.PrincipalNPerM[0]), direction(mt.PrincipalDirection[0]), k.f(mt.PrincipalNPerM[2]), direction(mt.PrincipalDirection[2]))
+				k.f(mt.PrincipalNPerM[0]), along, k.f(mt.PrincipalNPerM[2]), direction(mt.PrincipalDirection[2]))
 		}
 		tw.Flush()
 	}

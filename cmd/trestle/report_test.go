@@ -210,3 +210,22 @@ func TestDemoEndToEnd(t *testing.T) {
 	}
 	assert.InEpsilon(t, -rep.Cases[0].Equilibrium.AppliedN[2], sum, 1e-9)
 }
+
+func TestTiedSoftestDirection(t *testing.T) {
+	// Square footprint, identical legs: k_X = k_Y at the seat by symmetry,
+	// so the softest direction is any horizontal one; the report names a
+	// global axis and says the stiffness is tied.
+	r := trestle(t, "", "analyse", "--json", "testdata/tall-square.toml")
+	require.NoError(t, r.err)
+	var rep AnalysisReport
+	decodeStrict(t, r.stdout, &rep)
+	require.Len(t, rep.Mounts, 1)
+	mt := rep.Mounts[0]
+	assert.True(t, mt.SoftestTied)
+	assert.InEpsilon(t, mt.XNPerM, mt.YNPerM, 1e-9)
+	assert.Equal(t, [3]float64{1, 0, 0}, mt.PrincipalDirection[0])
+	assert.Equal(t, [3]float64{0, 1, 0}, mt.PrincipalDirection[1])
+	text := trestle(t, "", "analyse", "testdata/tall-square.toml")
+	require.NoError(t, text.err)
+	assert.Contains(t, text.stdout, "along X (as soft along Y)")
+}

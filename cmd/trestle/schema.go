@@ -81,6 +81,7 @@ type MountStiffness struct {
 	ZNPerM             float64       `json:"z_n_per_m"`
 	PrincipalNPerM     [3]float64    `json:"principal_n_per_m"`   // ascending
 	PrincipalDirection [3][3]float64 `json:"principal_direction"` // unit vectors, one per principal stiffness
+	SoftestTied        bool          `json:"softest_tied"`        // the two softest principal stiffnesses are equal: any direction in their plane is as soft
 }
 
 // CaseReport holds the static results of one load case or combination.
