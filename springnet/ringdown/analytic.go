@@ -49,21 +49,28 @@ func (b Band) settle() float64 {
 	return 4 / (2 * math.Pi * skirtFraction * (b.High - b.Low))
 }
 
-// analytic returns the (band-passed when band is not zero) signal y and its
-// Hilbert transform h, so that y + i·h is the analytic signal. Both come
-// from one real FFT of x zero-padded against wrap-around, the zero-phase
-// band-pass and −i·sign(f) applied in the frequency domain (Oppenheim &
-// Schafer, Discrete-Time Signal Processing, 3rd ed., §12.4), and one or two
-// inverse real FFTs. The DC term is removed in both.
-func analytic(x []float64, rate float64, band Band) (y, h []float64) {
-	n := len(x)
+// analyticLen returns the FFT length analytic needs for n samples: zero
+// padding of a sixteenth (at least 64 samples) against wrap-around, plus
+// the band-pass's settling time.
+func analyticLen(n int, rate float64, band Band) int {
 	guard := max(n/16, 64)
 	if !band.IsZero() {
 		guard += int(math.Ceil(band.settle() * rate))
 	}
 	guard = min(guard, n)
-	nf := fastLen(n + guard)
-	fft := fourier.NewFFT(nf)
+	return fastLen(n + guard)
+}
+
+// analytic returns the (band-passed when band is not zero) signal y and its
+// Hilbert transform h, so that y + i·h is the analytic signal. Both come
+// from one real FFT of x zero-padded against wrap-around, the zero-phase
+// band-pass and −i·sign(f) applied in the frequency domain (Oppenheim &
+// Schafer, Discrete-Time Signal Processing, 3rd ed., §12.4), and one or two
+// inverse real FFTs, all of length fft.Len() (from analyticLen). The DC
+// term is removed in both.
+func analytic(fft *fourier.FFT, x []float64, rate float64, band Band) (y, h []float64) {
+	n := len(x)
+	nf := fft.Len()
 	buf := make([]float64, nf)
 	copy(buf, x)
 	c := fft.Coefficients(nil, buf)

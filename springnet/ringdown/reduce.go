@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"math"
 	"slices"
+
+	"gonum.org/v1/gonum/dsp/fourier"
 )
 
 // Span is a stretch of time [Start, End] in seconds of record time.
@@ -153,20 +155,21 @@ type reduction struct {
 	fs   float64
 	warn []string
 
-	scale   float64    // largest |sample|: the record is divided by it
-	x       []float64  // detrended record, divided by scale
-	y, h    []float64  // isolated signal and its Hilbert transform
-	env     []float64  // analytic-signal envelope |y + i h|
-	es      []float64  // env smoothed over one period
-	f0      float64    // spectral peak frequency [Hz]
-	over    spectrum   // overview spectrum (from the strike on)
-	strike  int        // index of the largest |x|
-	clipped int        // number of clipped samples
-	clipEnd int        // last clipped sample, −1 if none
-	win     [2]int     // fit window, sample indices inclusive
-	floorOK bool       // the envelope reached the noise floor
-	floor   float64    // noise floor of the envelope
-	halfPts [2]float64 // half-power frequencies [Hz], zero if not found
+	scale   float64      // largest |sample|: the record is divided by it
+	x       []float64    // detrended record, divided by scale
+	y, h    []float64    // isolated signal and its Hilbert transform
+	env     []float64    // analytic-signal envelope |y + i h|
+	es      []float64    // env smoothed over one period
+	f0      float64      // spectral peak frequency [Hz]
+	over    spectrum     // overview spectrum (from the strike on)
+	strike  int          // index of the largest |x|
+	clipped int          // number of clipped samples
+	clipEnd int          // last clipped sample, −1 if none
+	win     [2]int       // fit window, sample indices inclusive
+	floorOK bool         // the envelope reached the noise floor
+	floor   float64      // noise floor of the envelope
+	halfPts [2]float64   // half-power frequencies [Hz], zero if not found
+	plan    *fourier.FFT // the last real FFT made, for reuse
 }
 
 func (r *reduction) addWarn(format string, a ...any) {
@@ -203,7 +206,7 @@ func (r *reduction) run() (Result, error) {
 	if err := r.findMode(); err != nil {
 		return Result{}, err
 	}
-	r.y, r.h = analytic(r.x, r.fs, r.cfg.band)
+	r.y, r.h = analytic(r.fft(analyticLen(n, r.fs, r.cfg.band)), r.x, r.fs, r.cfg.band)
 	r.env = make([]float64, n)
 	for i := range r.env {
 		r.env[i] = math.Hypot(r.y[i], r.h[i])
@@ -218,6 +221,16 @@ func (r *reduction) run() (Result, error) {
 	hp := r.halfPowerMethod(hfit)
 	ms = append(ms, pk, hb, sf, hp)
 	return r.combine(ms, sfit, hfit)
+}
+
+// fft returns a real FFT of length at least n, reusing the last one when it
+// is long enough and not more than twice n (its twiddle factors cost as much
+// as a transform).
+func (r *reduction) fft(n int) *fourier.FFT {
+	if r.plan == nil || r.plan.Len() < n || r.plan.Len() > 2*n {
+		r.plan = fourier.NewFFT(fastLen(n))
+	}
+	return r.plan
 }
 
 // detrend returns x less its least-squares straight line (gravity, DC and
@@ -289,7 +302,8 @@ func (r *reduction) findMode() error {
 		u := float64(i-(m-nt)) / float64(nt)
 		seg[i] *= 0.5 * (1 + math.Cos(math.Pi*u))
 	}
-	r.over = amplitudeSpectrum(seg, 1<<16, r.fs)
+	// The same length as the analytic signal's FFT, so one plan serves both.
+	r.over = amplitudeSpectrum(r.fft(max(analyticLen(len(r.x), r.fs, r.cfg.band), 1<<16)), seg, r.fs)
 	lo, hi := r.searchBand(m)
 	klo := int(math.Ceil(lo / r.over.df))
 	khi := int(math.Floor(hi / r.over.df))

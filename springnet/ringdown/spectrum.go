@@ -33,12 +33,13 @@ type spectrum struct {
 	mag  []float64 // |X(base + k·df)|, unnormalised
 }
 
-// amplitudeSpectrum returns |DFT| of x zero-padded to at least nfft points.
-func amplitudeSpectrum(x []float64, nfft int, rate float64) spectrum {
-	n := fastLen(max(nfft, len(x)))
+// amplitudeSpectrum returns |DFT| of x zero-padded to fft.Len() points
+// (at least len(x)).
+func amplitudeSpectrum(fft *fourier.FFT, x []float64, rate float64) spectrum {
+	n := fft.Len()
 	buf := make([]float64, n)
 	copy(buf, x)
-	c := fourier.NewFFT(n).Coefficients(nil, buf)
+	c := fft.Coefficients(nil, buf)
 	mag := make([]float64, len(c))
 	for i, v := range c {
 		mag[i] = cmplx.Abs(v)
