@@ -118,12 +118,12 @@ type Factor struct {
 	workers     []*fworker
 	main        *fworker
 	minParallel float64 // work threshold for going parallel (0: default)
-	gw      gemmPool
-	y       []float64
-	xblk    []float64 // SolveMany workspace
-	ok      bool
-	neg     int
-	pos     int
+	gw          gemmPool
+	y           []float64
+	xblk        []float64 // SolveMany workspace
+	ok          bool
+	neg         int
+	pos         int
 }
 
 // Analyze computes the ordering and the symbolic factorisation of A:
