@@ -133,6 +133,11 @@ func TestReadFormats(t *testing.T) {
 			rate: 1000, first: []float64{0, 0.1, 0.2}, column: "a",
 		},
 		{
+			name: "a preamble with semicolons does not decide the separator",
+			text: "Device; demo logger\nRate; 1 kHz\ntime,a\n" + rows(n, ",", 0.001, one, false),
+			rate: 1000, first: []float64{0, 0.1, 0.2}, column: "a",
+		},
+		{
 			name: "quoted fields and a trailing separator",
 			text: "\"time\";\"a\";\n" + strings.ReplaceAll(rows(n, ";", 0.001, one, false), "\n", ";\n"),
 			rate: 1000, first: []float64{0, 0.1, 0.2}, column: "a",
@@ -240,6 +245,8 @@ func TestReadErrors(t *testing.T) {
 			`ringdown: input: column "time" is the time column`},
 		{"only a time column", "time\n" + rows(20, ",", 0.001, func(int) []float64 { return nil }, false), ReadOptions{},
 			"ringdown: input: no signal column: the only column is time"},
+		{"one column, no header, no rate", rows(20, ",", 0, one, false), ReadOptions{},
+			"ringdown: input: one column only: give the sample rate (the column is then the signal) or add a time column"},
 		{"magnitude without three axes", "time,a\n" + good(20), ReadOptions{Magnitude: true},
 			"ringdown: input: magnitude needs three axis columns, found 1 signal column(s)"},
 		{"negative sample rate", good(20), ReadOptions{SampleRate: -5},

@@ -220,7 +220,7 @@ func (r *reduction) run() (Result, error) {
 	sf, sfit := r.sineMethod(hb, hfit)
 	hp := r.halfPowerMethod(hfit)
 	ms = append(ms, pk, hb, sf, hp)
-	return r.combine(ms, sfit, hfit)
+	return r.combine(ms, sfit)
 }
 
 // fft returns a real FFT of length at least n, reusing the last one when it

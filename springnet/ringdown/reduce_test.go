@@ -240,6 +240,12 @@ func TestReduceMeasuresAreConsistent(t *testing.T) {
 	d := res.Damping()
 	assert.InEpsilon(t, z, d.Ratio, 1e-15)
 	assert.Contains(t, res.String(), "ζ = 0.01")
+	// 30 dB SNR: noise σ = (2/√2)·10^(−1.5) = 0.0447; the envelope of white
+	// noise averages σ√(π/2) = 0.056 (Rayleigh mean). The floor is its
+	// median over one-period averages: within a factor 1.5 of that.
+	floor, reached := res.NoiseFloor()
+	assert.True(t, reached)
+	assert.InEpsilon(t, 0.056, floor, 0.5)
 	assert.Equal(t, MethodSineFit, res.Nominal())
 	assert.Equal(t, Band{}, res.Band())
 	require.Len(t, res.Methods(), 4)

@@ -73,20 +73,21 @@ type Window struct {
 // every common measure, each with its standard uncertainty, how the methods
 // compare, warnings, and what the picture needs. Obtain one from Reduce.
 type Result struct {
-	fd, fn     Estimate // damped and undamped natural frequency [Hz]
-	zeta       Estimate
-	delta      Estimate
-	eta        Estimate
-	q          Estimate
-	psi        Estimate
-	window     Window
-	methods    []MethodEstimate
-	agree      Agreement
-	warnings   []string
-	nominal    string // the method giving the nominal values
-	band       Band
-	pic        picture
-	noiseFloor float64
+	fd, fn       Estimate // damped and undamped natural frequency [Hz]
+	zeta         Estimate
+	delta        Estimate
+	eta          Estimate
+	q            Estimate
+	psi          Estimate
+	window       Window
+	methods      []MethodEstimate
+	agree        Agreement
+	warnings     []string
+	nominal      string // the method giving the nominal values
+	band         Band
+	pic          picture
+	noiseFloor   float64 // [unit of the record]
+	floorReached bool
 }
 
 // DampedFrequency returns the damped natural frequency f_d [Hz].
@@ -167,6 +168,11 @@ func (r Result) Agreement() Agreement { return r.agree }
 // doubtful, one sentence each (a copy).
 func (r Result) Warnings() []string { return slices.Clone(r.warnings) }
 
+// NoiseFloor returns the level of the (isolated) signal's envelope over the
+// record's last tenth, in the record's unit, and whether the ring-down had
+// reached it (if not, the level is the decay itself).
+func (r Result) NoiseFloor() (level float64, reached bool) { return r.noiseFloor, r.floorReached }
+
 // Band returns the isolation band used (zero if none) [Hz].
 func (r Result) Band() Band { return r.band }
 
@@ -199,7 +205,7 @@ func WithMeasuredLoss(m materials.Material, r Result) materials.Material {
 }
 
 // combine turns the method estimates into the Result.
-func (r *reduction) combine(ms []MethodEstimate, sf sineFit, hf hilbertFit) (Result, error) {
+func (r *reduction) combine(ms []MethodEstimate, sf sineFit) (Result, error) {
 	var nom *MethodEstimate
 	for _, name := range []string{MethodSineFit, MethodHilbert, MethodPeaks} {
 		for i := range ms {
@@ -229,7 +235,8 @@ func (r *reduction) combine(ms []MethodEstimate, sf sineFit, hf hilbertFit) (Res
 	fd := Estimate{nom.DampedFrequency.Value, math.Hypot(nom.DampedFrequency.Err, sampleSD(fs))}
 	c := math.Sqrt(1 - zeta.Value*zeta.Value)
 	fn := Estimate{fd.Value / c, math.Hypot(fd.Err/c, fd.Value*zeta.Value/(c*c*c)*zeta.Err)}
-	res := Result{fd: fd, fn: fn, zeta: zeta, methods: ms, nominal: nom.Method, band: r.cfg.band, noiseFloor: r.floor}
+	res := Result{fd: fd, fn: fn, zeta: zeta, methods: ms, nominal: nom.Method, band: r.cfg.band,
+		noiseFloor: r.floor * r.scale, floorReached: r.floorOK}
 	var err error
 	if res.delta, res.eta, res.q, res.psi, err = measures(zeta); err != nil {
 		return Result{}, err
