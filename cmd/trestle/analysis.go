@@ -301,7 +301,7 @@ func caseReport(m *springnet.Model, cr *springnet.CaseResult) CaseReport {
 		ReactionsN: [3]float64{eq.Reactions.FX, eq.Reactions.FY, eq.Reactions.FZ},
 		ForceError: eq.ForceError, MomentError: eq.MomentError}
 	tp := cr.Tipping()
-	r.Tipping = TippingReport{Found: tp.Found, Factor: tp.Factor, LastFoot: tp.LastFoot}
+	r.Tipping = TippingReport{Found: tp.Found, Factor: tp.Factor, LastFoot: tp.LastFoot, Note: tp.Note}
 	return r
 }
 
@@ -413,6 +413,11 @@ func alerts(rep *AnalysisReport) []string {
 	}
 	if len(g.UpliftFeet) > 0 {
 		w = append(w, fmt.Sprintf("UPLIFT: %s pull the stand down; they need anchors that carry tension", join(g.UpliftFeet)))
+	}
+	for _, c := range rep.Cases {
+		if !c.Tipping.Found && c.Tipping.Note != "" {
+			w = append(w, fmt.Sprintf("TIPPING MARGIN UNKNOWN for case %q: %s; check tipping by hand", c.Name, c.Tipping.Note))
+		}
 	}
 	if g.TippingFactor != nil && *g.TippingFactor < tippingFlag {
 		w = append(w, fmt.Sprintf("TIPPING: case %q tips at %.2f × its non-gravity loads (below %.1f)", g.TippingCase, *g.TippingFactor, tippingFlag))

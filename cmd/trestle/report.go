@@ -111,7 +111,14 @@ func writeAnalysis(w io.Writer, r *AnalysisReport, u unitSystem) {
 	if g.TippingFactor != nil {
 		fmt.Fprintf(tw, "  tipping margin\t%s ×\tthe non-gravity loads of case %q tip the stand\n", fixed(*g.TippingFactor, 2), g.TippingCase)
 	} else if r.Summary.Feet > 0 {
-		fmt.Fprintf(tw, "  tipping margin\t—\tno case's loads can tip the stand\n")
+		why := "no case's loads can tip the stand"
+		for _, c := range r.Cases {
+			if c.Tipping.Note != "" {
+				why = fmt.Sprintf("not found for case %q (see below)", c.Name)
+				break
+			}
+		}
+		fmt.Fprintf(tw, "  tipping margin\t—\t%s\n", why)
 	}
 	tw.Flush()
 
@@ -164,6 +171,8 @@ func writeAnalysis(w io.Writer, r *AnalysisReport, u unitSystem) {
 		switch {
 		case c.Tipping.Found:
 			fmt.Fprintf(w, "  tipping margin %s × the non-gravity loads (last foot to carry: %s)\n", fixed(c.Tipping.Factor, 2), c.Tipping.LastFoot)
+		case c.Tipping.Note != "":
+			fmt.Fprintf(w, "  tipping margin not found: %s\n", c.Tipping.Note)
 		}
 		if len(c.Feet) > 0 {
 			fmt.Fprintf(w, "\n  Feet (force from the floor on the stand, FZ up) [%s]\n", f.unit)

@@ -229,3 +229,30 @@ func TestTiedSoftestDirection(t *testing.T) {
 	require.NoError(t, text.err)
 	assert.Contains(t, text.stdout, "along X (as soft along Y)")
 }
+
+func TestTippingMarginOrWarning(t *testing.T) {
+	// Rigid-body statics: the stand tips about the leeward feet when
+	// λ·P·H = W·b/2 (the weight's centroid is over the middle of the
+	// square footprint), with P = 100 N at H = 1.5 m, b = 0.4 m and W the
+	// floor load of the case.
+	const p, h, b = 100.0, 1.5, 0.4
+	r := trestle(t, "", "analyse", "--json", "testdata/tall-square.toml")
+	require.NoError(t, r.err)
+	var rep AnalysisReport
+	decodeStrict(t, r.stdout, &rep)
+	want := rep.Summary.FloorLoadN * b / (2 * p * h)
+	tp := rep.Cases[0].Tipping
+	if tp.Found {
+		require.NotNil(t, rep.Governing.TippingFactor)
+		assert.InEpsilon(t, want, *rep.Governing.TippingFactor, 1e-6)
+		return
+	}
+	// Without an answer from the library the report must say so, not
+	// claim the stand cannot tip.
+	require.NotEmpty(t, tp.Note)
+	found := false
+	for _, w := range rep.Warnings {
+		found = found || strings.Contains(w, "TIPPING MARGIN UNKNOWN")
+	}
+	assert.True(t, found, "a warning names the unknown tipping margin")
+}

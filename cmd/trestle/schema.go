@@ -163,6 +163,7 @@ type TippingReport struct {
 	Found    bool    `json:"found"`  // some factor on the non-gravity loads tips the stand
 	Factor   float64 `json:"factor"` // that factor; 0 when not found
 	LastFoot string  `json:"last_foot,omitempty"`
+	Note     string  `json:"note,omitempty"` // why no factor was found, when the path stopped without an answer
 }
 
 // BucklingReport holds the lowest whole-frame buckling load factors of
