@@ -136,9 +136,9 @@ func closest(q key, cat []Material, keys []key, n int) []string {
 	}
 	cands := make([]cand, len(cat))
 	for i, k := range keys {
-		best := editDistance(q.joined, k.joined)
+		best := EditDistance(q.joined, k.joined)
 		for j := 1; j < len(k.words); j++ {
-			best = min(best, editDistance(q.joined, strings.Join(k.words[j:], "")))
+			best = min(best, EditDistance(q.joined, strings.Join(k.words[j:], "")))
 		}
 		cands[i] = cand{i, best}
 	}
@@ -148,28 +148,6 @@ func closest(q key, cat []Material, keys []key, n int) []string {
 		names = append(names, cat[c.i].Name)
 	}
 	return names
-}
-
-// editDistance returns the Levenshtein distance between a and b (in runes).
-func editDistance(a, b string) int {
-	ra, rb := []rune(a), []rune(b)
-	prev := make([]int, len(rb)+1)
-	cur := make([]int, len(rb)+1)
-	for j := range prev {
-		prev[j] = j
-	}
-	for i := 1; i <= len(ra); i++ {
-		cur[0] = i
-		for j := 1; j <= len(rb); j++ {
-			cost := 1
-			if ra[i-1] == rb[j-1] {
-				cost = 0
-			}
-			cur[j] = min(prev[j]+1, cur[j-1]+1, prev[j-1]+cost)
-		}
-		prev, cur = cur, prev
-	}
-	return prev[len(rb)]
 }
 
 func quoteList(names []string) string {

@@ -120,8 +120,8 @@ func TestEditDistance(t *testing.T) {
 	}
 	for _, tc := range tests {
 		t.Run(tc.a+"→"+tc.b, func(t *testing.T) {
-			assert.Equal(t, tc.d, editDistance(tc.a, tc.b))
-			assert.Equal(t, tc.d, editDistance(tc.b, tc.a), "symmetric")
+			assert.Equal(t, tc.d, EditDistance(tc.a, tc.b))
+			assert.Equal(t, tc.d, EditDistance(tc.b, tc.a), "symmetric")
 		})
 	}
 }

@@ -218,12 +218,12 @@ func unknownKind(k string) error {
 	}
 	best, bestD := "", 1<<30
 	for _, n := range names {
-		if d := editDistance(k, n); d < bestD {
+		if d := materials.EditDistance(k, n); d < bestD {
 			best, bestD = n, d
 		}
 	}
 	for a, n := range aliases {
-		if d := editDistance(k, a); d < bestD {
+		if d := materials.EditDistance(k, a); d < bestD {
 			best, bestD = n, d
 		}
 	}
@@ -238,27 +238,6 @@ func unknownKind(k string) error {
 
 func looksNumeric(s string) bool { return s != "" && (s[0] >= '0' && s[0] <= '9' || s[0] == '.') }
 
-// editDistance returns the Levenshtein distance between a and b in runes.
-func editDistance(a, b string) int {
-	ra, rb := []rune(a), []rune(b)
-	prev := make([]int, len(rb)+1)
-	cur := make([]int, len(rb)+1)
-	for j := range prev {
-		prev[j] = j
-	}
-	for i := 1; i <= len(ra); i++ {
-		cur[0] = i
-		for j := 1; j <= len(rb); j++ {
-			cost := 1
-			if ra[i-1] == rb[j-1] {
-				cost = 0
-			}
-			cur[j] = min(prev[j]+1, cur[j-1]+1, prev[j-1]+cost)
-		}
-		prev, cur = cur, prev
-	}
-	return prev[len(rb)]
-}
 
 var trailingLetters = regexp.MustCompile(`[a-z"]+$`)
 

@@ -3,6 +3,7 @@ package modelfile
 import (
 	"errors"
 	"fmt"
+	"github.com/trestle-go/trestle/materials"
 	"regexp"
 	"sort"
 	"strings"
@@ -105,7 +106,7 @@ func suggest(s string, names []string) string {
 	best, bestD := "", 1<<30
 	ls := strings.ToLower(s)
 	for _, n := range names {
-		if d := editDistance(ls, strings.ToLower(n)); d < bestD || d == bestD && n < best {
+		if d := materials.EditDistance(ls, strings.ToLower(n)); d < bestD || d == bestD && n < best {
 			best, bestD = n, d
 		}
 	}
@@ -113,31 +114,6 @@ func suggest(s string, names []string) string {
 		return ""
 	}
 	return fmt.Sprintf("; did you mean %q?", best)
-}
-
-// editDistance returns the Levenshtein distance between a and b in runes.
-func editDistance(a, b string) int {
-	ra, rb := []rune(a), []rune(b)
-	if len(ra) > 200 || len(rb) > 200 {
-		return 1 << 20 // not worth the time; not a typo
-	}
-	prev := make([]int, len(rb)+1)
-	cur := make([]int, len(rb)+1)
-	for j := range prev {
-		prev[j] = j
-	}
-	for i := 1; i <= len(ra); i++ {
-		cur[0] = i
-		for j := 1; j <= len(rb); j++ {
-			cost := 1
-			if ra[i-1] == rb[j-1] {
-				cost = 0
-			}
-			cur[j] = min(prev[j]+1, cur[j-1]+1, prev[j-1]+cost)
-		}
-		prev, cur = cur, prev
-	}
-	return prev[len(rb)]
 }
 
 // validateItem finds the item a springnet validation message names:
