@@ -238,7 +238,6 @@ func unknownKind(k string) error {
 
 func looksNumeric(s string) bool { return s != "" && (s[0] >= '0' && s[0] <= '9' || s[0] == '.') }
 
-
 var trailingLetters = regexp.MustCompile(`[a-z"]+$`)
 
 // sizes reads the sizes token "AxBxC" (n numbers), its unit (attached or
