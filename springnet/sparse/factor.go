@@ -4,6 +4,9 @@ import (
 	"fmt"
 	"math"
 	"slices"
+
+	"gonum.org/v1/gonum/blas"
+	"gonum.org/v1/gonum/blas/blas64"
 )
 
 // Ordering selects the fill-reducing ordering used by Factor.Analyze.
@@ -121,6 +124,7 @@ type Factor struct {
 	gw          gemmPool
 	y           []float64
 	xblk        []float64 // SolveMany workspace
+	tbuf        []float64 // Solve workspace: a supernode's off-diagonal rows
 	ok          bool
 	neg         int
 	pos         int
@@ -304,6 +308,11 @@ func (f *Factor) analyzePerm(a *Matrix, perm0 []int) error {
 	f.planTasks()
 	f.d = make([]float64, n)
 	f.y = make([]float64, n)
+	maxU := 0
+	for s := 0; s < ns; s++ {
+		maxU = max(maxU, f.sptr[s+1]-f.sptr[s]-(f.sfirst[s+1]-f.sfirst[s]))
+	}
+	f.tbuf = make([]float64, maxU)
 	return nil
 }
 
@@ -420,30 +429,47 @@ func (f *Factor) Solve(dst, b []float64) {
 	}
 }
 
+// solveBLAS is the supernode width from which solvePermuted uses the
+// (vectorised) gonum BLAS matrix-vector kernels rather than plain loops.
+const solveBLAS = 8
+
 // solvePermuted overwrites x with (L·D·Lᵀ)⁻¹·x, in pivot order.
 func (f *Factor) solvePermuted(x []float64) {
+	t := f.tbuf
 	// Forward: L·y = b.
 	for s := 0; s < f.ns; s++ {
 		c0, c1 := f.sfirst[s], f.sfirst[s+1]
 		k := c1 - c0
 		rows := f.srow[f.sptr[s]:f.sptr[s+1]]
+		u := len(rows) - k
 		lx := f.lx[f.lptr[s]:f.lptr[s+1]]
 		xs := x[c0:c1]
+		if k >= solveBLAS {
+			blas64.Trsv(blas.NoTrans, blas64.Triangular{Uplo: blas.Lower, Diag: blas.Unit, N: k, Stride: k, Data: lx[:k*k]}, blas64.Vector{N: k, Inc: 1, Data: xs})
+			if u > 0 {
+				ts := t[:u]
+				blas64.Gemv(blas.NoTrans, 1, blas64.General{Rows: u, Cols: k, Stride: k, Data: lx[k*k:]}, blas64.Vector{N: k, Inc: 1, Data: xs}, 0, blas64.Vector{N: u, Inc: 1, Data: ts})
+				for i, r := range rows[k:] {
+					x[r] -= ts[i]
+				}
+			}
+			continue
+		}
 		for j := 1; j < k; j++ {
 			lj := lx[j*k : j*k+j]
-			t := xs[j]
-			for c, v := range lj {
-				t -= v * xs[c]
+			v := xs[j]
+			for c, l := range lj {
+				v -= l * xs[c]
 			}
-			xs[j] = t
+			xs[j] = v
 		}
 		for i := k; i < len(rows); i++ {
 			li := lx[i*k : (i+1)*k]
-			t := 0.0
-			for c, v := range li {
-				t += v * xs[c]
+			v := 0.0
+			for c, l := range li {
+				v += l * xs[c]
 			}
-			x[rows[i]] -= t
+			x[rows[i]] -= v
 		}
 	}
 	for j, dj := range f.d {
@@ -454,23 +480,35 @@ func (f *Factor) solvePermuted(x []float64) {
 		c0, c1 := f.sfirst[s], f.sfirst[s+1]
 		k := c1 - c0
 		rows := f.srow[f.sptr[s]:f.sptr[s+1]]
+		u := len(rows) - k
 		lx := f.lx[f.lptr[s]:f.lptr[s+1]]
 		xs := x[c0:c1]
+		if k >= solveBLAS {
+			if u > 0 {
+				ts := t[:u]
+				for i, r := range rows[k:] {
+					ts[i] = x[r]
+				}
+				blas64.Gemv(blas.Trans, -1, blas64.General{Rows: u, Cols: k, Stride: k, Data: lx[k*k:]}, blas64.Vector{N: u, Inc: 1, Data: ts}, 1, blas64.Vector{N: k, Inc: 1, Data: xs})
+			}
+			blas64.Trsv(blas.Trans, blas64.Triangular{Uplo: blas.Lower, Diag: blas.Unit, N: k, Stride: k, Data: lx[:k*k]}, blas64.Vector{N: k, Inc: 1, Data: xs})
+			continue
+		}
 		for i := k; i < len(rows); i++ {
 			li := lx[i*k : (i+1)*k]
 			xi := x[rows[i]]
 			if xi == 0 {
 				continue
 			}
-			for c, v := range li {
-				xs[c] -= v * xi
+			for c, l := range li {
+				xs[c] -= l * xi
 			}
 		}
 		for i := k - 1; i > 0; i-- {
 			li := lx[i*k : i*k+i]
 			xi := xs[i]
-			for c, v := range li {
-				xs[c] -= v * xi
+			for c, l := range li {
+				xs[c] -= l * xi
 			}
 		}
 	}
