@@ -39,6 +39,19 @@ func direction(d [3]float64) string {
 	return fmt.Sprintf("(%.2f, %.2f, %.2f)", d[0], d[1], d[2])
 }
 
+// smallFloor: relative errors below it are round-off and print as
+// "< 1e-12" (a double-precision solve leaves 1e-16 to 1e-13 that changes
+// with the order of the arithmetic).
+const smallFloor = 1e-12
+
+// small formats a relative error or residual.
+func small(v float64) string {
+	if v < smallFloor {
+		return "< 1e-12"
+	}
+	return fmt.Sprintf("%.1e", v)
+}
+
 // writeCautions ends every report.
 func writeCautions(w io.Writer) {
 	heading(w, "CAUTIONS")
@@ -229,8 +242,8 @@ func writeAnalysis(w io.Writer, r *AnalysisReport, u unitSystem) {
 			tw.Flush()
 		}
 		eq := c.Equilibrium
-		fmt.Fprintf(w, "\n  Check: applied FZ %s, reactions FZ %s; equilibrium error force %.1e, moment %.1e; solve residual %.1e\n",
-			f.fu(eq.AppliedN[2]), f.fu(eq.ReactionsN[2]), eq.ForceError, eq.MomentError, c.Residual)
+		fmt.Fprintf(w, "\n  Check: applied FZ %s, reactions FZ %s; equilibrium error force %s, moment %s; solve residual %s\n",
+			f.fu(eq.AppliedN[2]), f.fu(eq.ReactionsN[2]), small(eq.ForceError), small(eq.MomentError), small(c.Residual))
 	}
 	if len(r.Pending) > 0 {
 		heading(w, "NOT IN THIS REPORT")

@@ -171,7 +171,13 @@ func num(v float64) string {
 }
 
 // pct formats a fraction as a percentage with one decimal.
-func pct(v float64) string { return strconv.FormatFloat(100*v, 'f', 1, 64) + " %" }
+func pct(v float64) string {
+	p := 100 * v
+	if math.Abs(p) < 0.05 {
+		p = 0 // no "-0.0 %"
+	}
+	return strconv.FormatFloat(p, 'f', 1, 64) + " %"
+}
 
 // fixed formats v with d decimals.
 func fixed(v float64, d int) string { return strconv.FormatFloat(v, 'f', d, 64) }
