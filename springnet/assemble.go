@@ -22,15 +22,7 @@ func (nt *net) elemStiffness(i int, k *[12][12]float64, dofs *[12]edof) int {
 	switch e.kind {
 	case BarKind:
 		kb := element.BarStiffness(p.frame, p.mp.ea)
-		for c := 0; c < 3; c++ {
-			push(e.a, c)
-		}
-		for c := 0; c < 3; c++ {
-			push(e.b, c)
-		}
-		for r := 0; r < 6; r++ {
-			copy(k[r][:6], kb[r][:])
-		}
+		nd = barMatrix(e, &kb, k, dofs)
 	case SpringKind:
 		orig := e.spring.K.arr()
 		var idx [6]int
@@ -86,22 +78,52 @@ func (nt *net) elemStiffness(i int, k *[12][12]float64, dofs *[12]edof) int {
 		}
 	case BeamKind:
 		kb := element.BeamStiffness(p.frame, p.bp)
-		var keep [12]int
-		for c := 0; c < 12; c++ {
-			n, comp := e.a, c
-			if c >= 6 {
-				n, comp = e.b, c-6
-			}
-			if comp >= 3 && ((c < 6 && !p.rotA) || (c >= 6 && !p.rotB)) {
-				continue
-			}
-			keep[nd] = c
-			push(n, comp)
+		nd = p.beamMatrix(e, &kb, k, dofs)
+	}
+	return nd
+}
+
+// barMatrix writes a bar's 6×6 matrix kb (translations of end a, then of
+// end b) into k over dofs and returns 6. Stiffness, geometric stiffness
+// and mass of a bar share this DOF list.
+func barMatrix(e *elem, kb *element.Mat6, k *[12][12]float64, dofs *[12]edof) int {
+	nd := 0
+	for _, n := range [2]NodeID{e.a, e.b} {
+		for c := 0; c < 3; c++ {
+			dofs[nd] = edof{n, c}
+			nd++
 		}
-		for r := 0; r < nd; r++ {
-			for c := 0; c < nd; c++ {
-				k[r][c] = kb[keep[r]][keep[c]]
-			}
+	}
+	for r := 0; r < 6; r++ {
+		copy(k[r][:6], kb[r][:])
+	}
+	return nd
+}
+
+// beamMatrix writes the part of a beam's 12×12 matrix kb (end a, then end
+// b, UX…RZ each) over the DOF the beam carries into k over dofs and
+// returns their number: translations at both ends, rotations at an end
+// only where the beam reaches them (p.rotA, p.rotB; an end released in
+// every rotation has none). Stiffness, geometric stiffness and mass of a
+// beam share this DOF list, so their patterns match.
+func (p *prepElem) beamMatrix(e *elem, kb *element.Mat12, k *[12][12]float64, dofs *[12]edof) int {
+	var keep [12]int
+	nd := 0
+	for c := 0; c < 12; c++ {
+		n, comp := e.a, c
+		if c >= 6 {
+			n, comp = e.b, c-6
+		}
+		if comp >= 3 && ((c < 6 && !p.rotA) || (c >= 6 && !p.rotB)) {
+			continue
+		}
+		keep[nd] = c
+		dofs[nd] = edof{n, comp}
+		nd++
+	}
+	for r := 0; r < nd; r++ {
+		for c := 0; c < nd; c++ {
+			k[r][c] = kb[keep[r]][keep[c]]
 		}
 	}
 	return nd
@@ -129,29 +151,11 @@ func (nt *net) assembleWith(b *sparse.Builder, fn elemMatrix, extra [][6][6]floa
 	}
 	var k [12][12]float64
 	var dofs [12]edof
-	var tbuf [12][3]term
-	var ts [12][]term
 	for i := range nt.m.elems {
 		nd := fn(i, &k, &dofs)
-		keepZeros := nt.m.elems[i].kind == FootKind
-		for a := 0; a < nd; a++ {
-			ts[a] = d.nodeTerms(dofs[a].n, dofs[a].c, nt.m.nodes[dofs[a].n].at, &tbuf[a])
-		}
-		for a := 0; a < nd; a++ {
-			for bb := 0; bb < nd; bb++ {
-				v := k[a][bb]
-				if v == 0 && !keepZeros {
-					continue
-				}
-				for _, ta := range ts[a] {
-					for _, tb := range ts[bb] {
-						if ta.eq >= tb.eq {
-							b.Add(ta.eq, tb.eq, v*ta.coef*tb.coef)
-						}
-					}
-				}
-			}
-		}
+		// A foot keeps its entries when lifted (zero), so that the
+		// pattern does not change with the contact state.
+		d.scatter(b, nt.m, &k, &dofs, nd, nt.m.elems[i].kind == FootKind)
 	}
 	for o, blk := range extra {
 		eq := d.ownerEq[o]
@@ -164,6 +168,36 @@ func (nt *net) assembleWith(b *sparse.Builder, fn elemMatrix, extra [][6][6]floa
 		}
 	}
 	return b.Matrix()
+}
+
+// scatter adds the element matrix k over its DOF list dofs[:nd] to b
+// through the rigid-group transformation (each node DOF a sum of
+// equation terms, K_eq = Tᵀ·k·T), lower triangle only. Zero entries are
+// skipped unless keepZeros. It reports whether a non-zero value was added.
+func (d *dofMap) scatter(b *sparse.Builder, m *Model, k *[12][12]float64, dofs *[12]edof, nd int, keepZeros bool) bool {
+	var tbuf [12][3]term
+	var ts [12][]term
+	for a := 0; a < nd; a++ {
+		ts[a] = d.nodeTerms(dofs[a].n, dofs[a].c, m.nodes[dofs[a].n].at, &tbuf[a])
+	}
+	nonzero := false
+	for a := 0; a < nd; a++ {
+		for bb := 0; bb < nd; bb++ {
+			v := k[a][bb]
+			if v == 0 && !keepZeros {
+				continue
+			}
+			for _, ta := range ts[a] {
+				for _, tb := range ts[bb] {
+					if ta.eq >= tb.eq {
+						b.Add(ta.eq, tb.eq, v*ta.coef*tb.coef)
+						nonzero = nonzero || v != 0
+					}
+				}
+			}
+		}
+	}
+	return nonzero
 }
 
 // nodeDisp returns the six displacements of node n from the equation

@@ -146,46 +146,39 @@ func TestBeamReleasesAndJointSprings(t *testing.T) {
 	require.NoError(t, err)
 	iy, iz := pr.Iy, pr.Iz
 
-	t.Run("simply supported by end pins, both planes", func(t *testing.T) {
-		// Two members a–m–b, ends pinned by releases at the supports (which
-		// are fixed in every direction), load at mid-span: δ = P·L³/(48EI)
-		// (Timoshenko & Gere, simply supported beam, central load).
-		var m springnet.Model
-		a := m.AddNode("a", springnet.Vec{})
-		mid := m.AddNode("mid", springnet.Vec{X: l / 2})
-		b := m.AddNode("b", springnet.Vec{X: l})
-		m.Fix(a, springnet.AllDOF)
-		m.Fix(b, springnet.AllDOF)
-		m.AddBeam(a, mid, springnet.Beam{Material: beamSteel(), Section: sec, ReleaseA: springnet.ReleasePin})
-		m.AddBeam(mid, b, springnet.Beam{Material: beamSteel(), Section: sec, ReleaseB: springnet.ReleasePin})
-		m.AddLoad(mid, springnet.Load{FY: p, FZ: p})
-		res, err := springnet.Static(&m, nil)
-		require.NoError(t, err)
-		d := res.Displacement(mid)
-		assert.InEpsilon(t, p*l*l*l/(48*e*iz), d.UY, beamTol)
-		assert.InEpsilon(t, p*l*l*l/(48*e*iy), d.UZ, beamTol)
-	})
-
-	t.Run("pin about one axis only", func(t *testing.T) {
-		// ReleaseRY pins bending about local y only: about y the span is
-		// simply supported (P·L³/48EIy), about z it stays fixed–fixed
-		// (P·L³/192EIz; Timoshenko & Gere, beam fixed at both ends,
-		// central load).
-		var m springnet.Model
-		a := m.AddNode("a", springnet.Vec{})
-		mid := m.AddNode("mid", springnet.Vec{X: l / 2})
-		b := m.AddNode("b", springnet.Vec{X: l})
-		m.Fix(a, springnet.AllDOF)
-		m.Fix(b, springnet.AllDOF)
-		m.AddBeam(a, mid, springnet.Beam{Material: beamSteel(), Section: sec, ReleaseA: springnet.ReleaseRY})
-		m.AddBeam(mid, b, springnet.Beam{Material: beamSteel(), Section: sec, ReleaseB: springnet.ReleaseRY})
-		m.AddLoad(mid, springnet.Load{FY: p, FZ: p})
-		res, err := springnet.Static(&m, nil)
-		require.NoError(t, err)
-		d := res.Displacement(mid)
-		assert.InEpsilon(t, p*l*l*l/(192*e*iz), d.UY, beamTol)
-		assert.InEpsilon(t, p*l*l*l/(48*e*iy), d.UZ, beamTol)
-	})
+	// Two members a–m–b between supports fixed in every direction, load P
+	// along Y and Z at mid-span m, the members' ends at the supports
+	// released: both bending rotations pinned, the span is simply
+	// supported in both planes, δ = P·L³/(48EI); ReleaseRY pins bending
+	// about local y only, so about z the span stays fixed–fixed,
+	// δ = P·L³/(192EI) (Timoshenko & Gere, Mechanics of Materials, simply
+	// supported and fixed-ended beams with a central load).
+	spans := []struct {
+		name     string
+		rel      springnet.Release
+		kUY, kUZ float64 // δ = P·L³/(k·E·I)
+	}{
+		{"simply supported by end pins, both planes", springnet.ReleasePin, 48, 48},
+		{"pin about one axis only", springnet.ReleaseRY, 192, 48},
+	}
+	for _, tc := range spans {
+		t.Run(tc.name, func(t *testing.T) {
+			var m springnet.Model
+			a := m.AddNode("a", springnet.Vec{})
+			mid := m.AddNode("mid", springnet.Vec{X: l / 2})
+			b := m.AddNode("b", springnet.Vec{X: l})
+			m.Fix(a, springnet.AllDOF)
+			m.Fix(b, springnet.AllDOF)
+			m.AddBeam(a, mid, springnet.Beam{Material: beamSteel(), Section: sec, ReleaseA: tc.rel})
+			m.AddBeam(mid, b, springnet.Beam{Material: beamSteel(), Section: sec, ReleaseB: tc.rel})
+			m.AddLoad(mid, springnet.Load{FY: p, FZ: p})
+			res, err := springnet.Static(&m, nil)
+			require.NoError(t, err)
+			d := res.Displacement(mid)
+			assert.InEpsilon(t, p*l*l*l/(tc.kUY*e*iz), d.UY, beamTol)
+			assert.InEpsilon(t, p*l*l*l/(tc.kUZ*e*iy), d.UZ, beamTol)
+		})
+	}
 
 	t.Run("torsion release", func(t *testing.T) {
 		// Two shafts in series a–m–b, both ends fixed, torque at m:

@@ -100,23 +100,13 @@ func (sv *Solver) Buckling(m *Model, c CaseID, s *BucklingSettings) (*BucklingRe
 	if err != nil {
 		return nil, err
 	}
-	var co []int
-	for i := range m.elems {
-		if m.elems[i].kind == FootKind && m.elems[i].foot.CompressionOnly {
-			co = append(co, i)
-		}
+	co := compressionOnlyFeet(m)
+	factored := false
+	cr, err := sv.solveCaseOn(nt, c, cl, co, &factored)
+	if err != nil {
+		return nil, err
 	}
-	var cr *CaseResult
-	if len(co) == 0 {
-		if err := sv.factor(nt); err != nil {
-			return nil, err
-		}
-		cr = sv.solveCase(nt, c, cl)
-	} else {
-		cr, err = sv.contact(nt, c, cl, co)
-		if err != nil {
-			return nil, err
-		}
+	if len(co) > 0 {
 		// The tipping search moves the contact state on; restore the
 		// state of the solution.
 		for _, i := range co {
@@ -310,41 +300,15 @@ func (nt *net) normaliseMode(v []float64) []float64 {
 func (nt *net) elemGeometric(i int, n float64, k *[12][12]float64, dofs *[12]edof) int {
 	e := &nt.m.elems[i]
 	p := &nt.el[i]
-	nd := 0
-	push := func(nn NodeID, c int) { dofs[nd] = edof{nn, c}; nd++ }
 	switch e.kind {
 	case BarKind:
 		kb := element.BarGeometricStiffness(p.frame, n)
-		for c := 0; c < 3; c++ {
-			push(e.a, c)
-		}
-		for c := 0; c < 3; c++ {
-			push(e.b, c)
-		}
-		for r := 0; r < 6; r++ {
-			copy(k[r][:6], kb[r][:])
-		}
+		return barMatrix(e, &kb, k, dofs)
 	case BeamKind:
 		kb := element.BeamGeometricStiffness(p.frame, p.bp, n)
-		var keep [12]int
-		for c := 0; c < 12; c++ {
-			nn, comp := e.a, c
-			if c >= 6 {
-				nn, comp = e.b, c-6
-			}
-			if comp >= 3 && ((c < 6 && !p.rotA) || (c >= 6 && !p.rotB)) {
-				continue
-			}
-			keep[nd] = c
-			push(nn, comp)
-		}
-		for r := 0; r < nd; r++ {
-			for c := 0; c < nd; c++ {
-				k[r][c] = kb[keep[r]][keep[c]]
-			}
-		}
+		return p.beamMatrix(e, &kb, k, dofs)
 	}
-	return nd
+	return 0
 }
 
 // axialForGeometric returns the axial force that loads member i's
@@ -364,8 +328,6 @@ func (nt *net) assembleGeometric(b *sparse.Builder, forces []ElementForce) (*spa
 	b.Reset(d.n)
 	var k [12][12]float64
 	var dofs [12]edof
-	var tbuf [12][3]term
-	var ts [12][]term
 	nonzero := false
 	for i := range nt.m.elems {
 		kind := nt.m.elems[i].kind
@@ -377,24 +339,8 @@ func (nt *net) assembleGeometric(b *sparse.Builder, forces []ElementForce) (*spa
 			continue
 		}
 		nd := nt.elemGeometric(i, n, &k, &dofs)
-		for a := 0; a < nd; a++ {
-			ts[a] = d.nodeTerms(dofs[a].n, dofs[a].c, nt.m.nodes[dofs[a].n].at, &tbuf[a])
-		}
-		for a := 0; a < nd; a++ {
-			for bb := 0; bb < nd; bb++ {
-				v := k[a][bb]
-				if v == 0 {
-					continue
-				}
-				for _, ta := range ts[a] {
-					for _, tb := range ts[bb] {
-						if ta.eq >= tb.eq {
-							b.Add(ta.eq, tb.eq, v*ta.coef*tb.coef)
-							nonzero = true
-						}
-					}
-				}
-			}
+		if d.scatter(b, nt.m, &k, &dofs, nd, false) {
+			nonzero = true
 		}
 	}
 	return b.Matrix(), nonzero

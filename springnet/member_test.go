@@ -287,25 +287,7 @@ func TestMemberUnsymmetricBendingAngle(t *testing.T) {
 	// σ = N/A + My'·z'/Iy' − Mz'·y'/Iz' at the six corners.
 	const b, tk, l = 0.05, 0.005, 0.6
 	const fx, fy, fz = -2e3, 150.0, -300.0
-	type rect struct{ y0, y1, z0, z1 float64 }
-	rs := []rect{{0, b, 0, tk}, {0, tk, tk, b}}
-	var area, sy, sz float64
-	for _, r := range rs {
-		a := (r.y1 - r.y0) * (r.z1 - r.z0)
-		area += a
-		sy += a * (r.y0 + r.y1) / 2
-		sz += a * (r.z0 + r.z1) / 2
-	}
-	yc, zc := sy/area, sz/area
-	var iy, iz, iyz float64
-	for _, r := range rs {
-		w, h := r.y1-r.y0, r.z1-r.z0
-		a := w * h
-		dy, dz := (r.y0+r.y1)/2-yc, (r.z0+r.z1)/2-zc
-		iy += w*h*h*h/12 + a*dz*dz
-		iz += h*w*w*w/12 + a*dy*dy
-		iyz += a * dy * dz
-	}
+	area, yc, zc, iy, iz, iyz := sharpAngle(b, b, tk)
 	th := 0.5 * math.Atan2(-2*iyz, iy-iz)
 	c, s := math.Cos(th), math.Sin(th)
 	iyP := iy*c*c + iz*s*s - 2*iyz*s*c
@@ -434,10 +416,7 @@ func TestMemberEulerCheckAngle(t *testing.T) {
 	// properties of a sharp 50 × 50 × 5 mm angle (Iy = Iz by symmetry of
 	// the legs, so I_min = Iy − |Iyz|).
 	const b, tk, l, e = 0.05, 0.005, 1.0, 200e9
-	a1, a2 := b*tk, tk*(b-tk)
-	c := (a1*tk/2 + a2*(tk+b)/2) / (a1 + a2) // centroid from the heel, both axes
-	iy := b*tk*tk*tk/12 + a1*(tk/2-c)*(tk/2-c) + tk*(b-tk)*(b-tk)*(b-tk)/12 + a2*((tk+b)/2-c)*((tk+b)/2-c)
-	iyz := a1*(b/2-c)*(tk/2-c) + a2*(tk/2-c)*((tk+b)/2-c)
+	_, _, _, iy, _, iyz := sharpAngle(b, b, tk)
 	imin := iy - math.Abs(iyz)
 	m, tip, el := beamCantilever(springnet.Vec{Z: 1}, l, springnet.Beam{Material: beamSteel(), Section: sections.Angle{B: b, H: b, T: tk}})
 	m.AddLoad(tip, springnet.Load{FZ: -1e3})

@@ -49,12 +49,7 @@ func (s *Solver) Static(m *Model, st *StaticSettings) (*StaticResult, error) {
 		return nil, err
 	}
 	res := &StaticResult{m: m, level: st.Level, nt: nt}
-	var co []int
-	for i := range m.elems {
-		if m.elems[i].kind == FootKind && m.elems[i].foot.CompressionOnly {
-			co = append(co, i)
-		}
-	}
+	co := compressionOnlyFeet(m)
 	var worst *ConditionError
 	factored := false
 	for c := range m.cases {
@@ -62,20 +57,9 @@ func (s *Solver) Static(m *Model, st *StaticSettings) (*StaticResult, error) {
 		if err != nil {
 			return nil, err
 		}
-		var cr *CaseResult
-		if len(co) == 0 {
-			if !factored {
-				if err := s.factor(nt); err != nil {
-					return nil, err
-				}
-				factored = true
-			}
-			cr = s.solveCase(nt, CaseID(c), cl)
-		} else {
-			cr, err = s.contact(nt, CaseID(c), cl, co)
-			if err != nil {
-				return nil, err
-			}
+		cr, err := s.solveCaseOn(nt, CaseID(c), cl, co, &factored)
+		if err != nil {
+			return nil, err
 		}
 		if cr.residual > MaxResidual && (worst == nil || cr.residual > worst.Residual) {
 			worst = &ConditionError{Case: fmt.Sprintf("case %q", cr.name), Residual: cr.residual}
@@ -89,6 +73,35 @@ func (s *Solver) Static(m *Model, st *StaticSettings) (*StaticResult, error) {
 		return res, worst
 	}
 	return res, nil
+}
+
+// compressionOnlyFeet returns the element indices of the
+// compression-only feet of m.
+func compressionOnlyFeet(m *Model) []int {
+	var co []int
+	for i := range m.elems {
+		if m.elems[i].kind == FootKind && m.elems[i].foot.CompressionOnly {
+			co = append(co, i)
+		}
+	}
+	return co
+}
+
+// solveCaseOn solves case c of nt: without compression-only feet by the
+// factorisation of K (made first unless *factored, which it then sets),
+// else by the active-set loop over the feet co, which refactorises as the
+// contact set changes (and leaves *factored alone).
+func (s *Solver) solveCaseOn(nt *net, c CaseID, cl *caseLoads, co []int, factored *bool) (*CaseResult, error) {
+	if len(co) > 0 {
+		return s.contact(nt, c, cl, co)
+	}
+	if !*factored {
+		if err := s.factor(nt); err != nil {
+			return nil, err
+		}
+		*factored = true
+	}
+	return s.solveCase(nt, c, cl), nil
 }
 
 // solveCase solves one case with the current factorisation and recovers

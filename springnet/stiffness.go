@@ -79,18 +79,7 @@ func (s *Solver) pointStiffness(nt *net, p Place) (*PointStiffness, error) {
 	u := make([]float64, d.n)
 	worst := 0.0
 	for j := 0; j < ncol; j++ {
-		for i := range ol {
-			ol[i] = [6]float64{}
-		}
-		var f, mo Vec
-		if j < 3 {
-			f = unitVec(j)
-		} else {
-			mo = unitVec(j - 3)
-		}
-		d.addOwnerLoad(ol, o, at, f, mo)
-		b := d.eqVector(nil, ol)
-		worst = math.Max(worst, s.solve(u, b))
+		worst = math.Max(worst, s.unitLoadSolve(d, o, at, j, ol, u))
 		w := d.pointDisp(o, at, u)
 		for i := 0; i < ncol; i++ {
 			ps.c[i][j] = w[i]
@@ -120,6 +109,24 @@ func (s *Solver) pointStiffness(nt *net, p Place) (*PointStiffness, error) {
 		return ps, &ConditionError{Case: "stiffness at " + ps.name, Residual: worst}
 	}
 	return ps, nil
+}
+
+// unitLoadSolve solves K·u = f with the current factorisation for a unit
+// force along axis j (j < 3) or a unit moment about axis j − 3 at the
+// point at on owner o, and returns the relative residual. ol is scratch
+// of one [6]float64 per owner; u receives the solution.
+func (s *Solver) unitLoadSolve(d *dofMap, o int, at Vec, j int, ol [][6]float64, u []float64) float64 {
+	for i := range ol {
+		ol[i] = [6]float64{}
+	}
+	var f, mo Vec
+	if j < 3 {
+		f = unitVec(j)
+	} else {
+		mo = unitVec(j - 3)
+	}
+	d.addOwnerLoad(ol, o, at, f, mo)
+	return s.solve(u, d.eqVector(nil, ol))
 }
 
 // invertSym inverts the leading n×n block of a symmetric positive definite
