@@ -61,6 +61,9 @@ const (
 	// secondPeakLevel: another spectral peak above this fraction of the
 	// dominant one (−10 dB) earns a warning when no band is given.
 	secondPeakLevel = 0.316
+	// restrikeRise: an envelope that grows by this factor within two
+	// cycles marks a second strike (a free decay only falls).
+	restrikeRise = 2
 )
 
 // Method names in Result.Methods, in this order.
@@ -155,21 +158,22 @@ type reduction struct {
 	fs   float64
 	warn []string
 
-	scale   float64      // largest |sample|: the record is divided by it
-	x       []float64    // detrended record, divided by scale
-	y, h    []float64    // isolated signal and its Hilbert transform
-	env     []float64    // analytic-signal envelope |y + i h|
-	es      []float64    // env smoothed over one period
-	f0      float64      // spectral peak frequency [Hz]
-	over    spectrum     // overview spectrum (from the strike on)
-	strike  int          // index of the largest |x|
-	clipped int          // number of clipped samples
-	clipEnd int          // last clipped sample, −1 if none
-	win     [2]int       // fit window, sample indices inclusive
-	floorOK bool         // the envelope reached the noise floor
-	floor   float64      // noise floor of the envelope
-	halfPts [2]float64   // half-power frequencies [Hz], zero if not found
-	plan    *fourier.FFT // the last real FFT made, for reuse
+	scale    float64      // largest |sample|: the record is divided by it
+	x        []float64    // detrended record, divided by scale
+	y, h     []float64    // isolated signal and its Hilbert transform
+	env      []float64    // analytic-signal envelope |y + i h|
+	es       []float64    // env smoothed over one period
+	f0       float64      // spectral peak frequency [Hz]
+	over     spectrum     // overview spectrum (from the strike on)
+	strike   int          // index of the largest |x|
+	clipped  int          // number of clipped samples
+	clipEnd  int          // last clipped sample, −1 if none
+	win      [2]int       // fit window, sample indices inclusive
+	floorOK  bool         // the envelope reached the noise floor
+	floor    float64      // noise floor of the envelope
+	halfPts  [2]float64   // half-power frequencies [Hz], zero if not found
+	restrike int          // where a second strike begins, −1 if none
+	plan     *fourier.FFT // the last real FFT made, for reuse
 }
 
 func (r *reduction) addWarn(format string, a ...any) {
@@ -334,7 +338,12 @@ func (r *reduction) searchBand(m int) (lo, hi float64) {
 // from the dominant peak, comes within 10 dB of it.
 func (r *reduction) checkSecondPeak(k, klo, khi int) {
 	mag := r.over.mag
-	away := max(3, int(0.1*float64(k)))
+	// Skip the dominant peak itself: three half-power widths either side
+	// (or three bins).
+	away := 3
+	if lo, hi, ok := r.over.halfPower(k); ok {
+		away = max(away, int(1.5*(hi-lo)/r.over.df))
+	}
 	limit := secondPeakLevel * mag[k]
 	best, bk := 0.0, -1
 	for i := max(klo, 1); i <= min(khi, len(mag)-2); i++ {
@@ -430,6 +439,27 @@ func (r *reduction) chooseWindow() error {
 	}
 	if r.floorOK {
 		end = cross
+	}
+	// A second strike: the envelope more than doubles within two cycles,
+	// once; the window ends a cycle before the rise begins. Two close modes
+	// beating make the envelope rise after every null instead: several
+	// rises are reported as beating and leave the window alone.
+	r.restrike = -1
+	lag := 2 * pi
+	var rises []int
+	for i := start + lag; i <= end; i++ {
+		if es[i] > restrikeRise*es[i-lag] {
+			rises = append(rises, i-lag)
+			i += 2 * lag // one rise, not many samples of it
+		}
+	}
+	switch {
+	case len(rises) == 1:
+		r.restrike = rises[0]
+		r.addWarn("the envelope jumps at %.4g s (a second strike?): the fit window ends before it", r.rec.Time(rises[0]))
+		end = max(start, rises[0]-pi)
+	case len(rises) > 1:
+		r.addWarn("the envelope rises %d times in the fit window (two close modes beating?): give a band or centre frequency", len(rises))
 	}
 	if end-start < int(2*p) {
 		return fmt.Errorf("ringdown: the %.4g Hz ring-down stays clear of the noise floor (and of clipping) for fewer than two cycles", r.f0)
@@ -659,6 +689,9 @@ func (r *reduction) halfPowerMethod(hf hilbertFit) MethodEstimate {
 	// noise floor, so that the decay is nearly complete (cutting it short
 	// widens the peak) without adding more noise than needed.
 	last := len(r.y) - 1 - int(math.Ceil(2*r.period()+r.cfg.band.settle()*r.fs))
+	if r.restrike >= 0 {
+		last = min(last, r.restrike)
+	}
 	end := max(last, b)
 	if r.floorOK {
 		for i := b; i <= last; i++ {
