@@ -25,18 +25,13 @@ func sceneOf(a *analysed, c springnet.CaseID, scale float64) draw.Scene {
 		d := cr.At(springnet.MountID(i))
 		s.Mounts[i].Move = draw.Point{X: d.UX, Y: d.UY, Z: d.UZ}
 	}
-	// Members in FromModel order: every element that is not a foot.
-	k := 0
-	for e := 0; e < m.NumElements(); e++ {
-		id := springnet.ElementID(e)
-		if m.ElementKind(id) == springnet.FootKind {
-			continue
+	// Members in FromModel order are the report's members: every element
+	// that is not a foot, in element order.
+	rm := a.report.Cases[c].Members
+	for k := range s.Members {
+		if k < len(rm) && rm[k].Name == s.Members[k].Name && rm[k].Rated {
+			s.Members[k].Value, s.Members[k].Rated = rm[k].Utilisation, true
 		}
-		f := cr.Force(id)
-		if f.Utilisation != 0 {
-			s.Members[k].Value, s.Members[k].Rated = math.Abs(f.Utilisation), true
-		}
-		k++
 	}
 	s.Title = fmt.Sprintf("%s — case %q", a.report.Model, cr.Name())
 	s.Colours = draw.Colours{Name: "utilisation", Max: 1, Percent: true}
@@ -45,8 +40,9 @@ func sceneOf(a *analysed, c springnet.CaseID, scale float64) draw.Scene {
 	s.Notes = []string{
 		"Linear elastic, small-displacement model. Check anchoring, tipping, floor capacity and local codes; defer to licensed engineering practice.",
 	}
-	if len(a.report.Pending) > 0 {
-		s.Notes = append(s.Notes, "Beams are grey until springnet's member checks rate them.")
+	if a.report.Cases[c].MaxUtilisationMember != "" {
+		s.Notes = append(s.Notes, fmt.Sprintf("Highest utilisation in this case: %s, %s (fibre stress over strength; not a code check).",
+			a.report.Cases[c].MaxUtilisationMember, pct(a.report.Cases[c].MaxUtilisation)))
 	}
 	return s
 }
