@@ -256,3 +256,37 @@ func TestTippingMarginOrWarning(t *testing.T) {
 	}
 	assert.True(t, found, "a warning names the unknown tipping margin")
 }
+
+// TestRangesHandCheck: every stiffness of testdata/steel-legs.toml is E
+// times geometry, so at the catalogue's low, nominal and high E of steel
+// S235 the mount stiffness scales with E and the natural frequency with
+// √E (the mass does not change); the sway stiffness of four fixed–guided
+// round legs is 4·12·E·I/L³ with I = π·d⁴/64 (Roark's Formulas for Stress
+// and Strain, Table 8.1, case 1e; a circle's second moment).
+func TestRangesHandCheck(t *testing.T) {
+	const (
+		d, L           = 0.030, 0.7
+		eLo, eNom, eHi = 195e9, 210e9, 212e9 // steel S235 E range in the materials catalogue
+		tol            = 1e-9
+	)
+	r := trestle(t, "", "ranges", "--json", "testdata/steel-legs.toml")
+	require.NoError(t, r.err)
+	var rep RangesReport
+	decodeStrict(t, r.stdout, &rep)
+	require.Len(t, rep.Levels, 3)
+	lo, nom, hi := rep.Levels[0], rep.Levels[1], rep.Levels[2]
+	require.Equal(t, []string{"low", "nominal", "high"}, []string{lo.Level, nom.Level, hi.Level})
+	i := math.Pi * math.Pow(d, 4) / 64
+	assert.InEpsilon(t, 4*12*eNom*i/(L*L*L), nom.Governing.SoftestStiffnessNPerM, tol)
+	assert.InEpsilon(t, eLo/eNom, lo.Governing.SoftestStiffnessNPerM/nom.Governing.SoftestStiffnessNPerM, tol)
+	assert.InEpsilon(t, eHi/eNom, hi.Governing.SoftestStiffnessNPerM/nom.Governing.SoftestStiffnessNPerM, tol)
+	require.NotNil(t, lo.Governing.FirstFrequencyHz)
+	require.NotNil(t, nom.Governing.FirstFrequencyHz)
+	require.NotNil(t, hi.Governing.FirstFrequencyHz)
+	assert.InEpsilon(t, math.Sqrt(eLo/eNom), *lo.Governing.FirstFrequencyHz / *nom.Governing.FirstFrequencyHz, tol)
+	assert.InEpsilon(t, math.Sqrt(eHi/eNom), *hi.Governing.FirstFrequencyHz / *nom.Governing.FirstFrequencyHz, tol)
+	// Under its own weight each leg carries a quarter in pure compression
+	// whatever E is: the utilisation does not change.
+	assert.InEpsilon(t, nom.Governing.MaxUtilisation, lo.Governing.MaxUtilisation, tol)
+	assert.InEpsilon(t, nom.Governing.MaxUtilisation, hi.Governing.MaxUtilisation, tol)
+}
