@@ -229,3 +229,50 @@ func TestMechanismTable(t *testing.T) {
 		assert.Less(t, eq.MomentError, closeTol)
 	})
 }
+
+func TestConditionErrorStiffLinkOnSoftFoot(t *testing.T) {
+	// A very stiff link (k₁) carried on a very soft foot (k₂): both ends
+	// move about F/k₂ while the link stretches only F/k₁. The link's
+	// force k₁·(u_c − u_b) is the difference of two nearly equal
+	// displacements times a huge stiffness, so the residual ‖K·u − f‖/‖f‖
+	// is of order round-off × k₁/k₂ (Higham, Accuracy and Stability of
+	// Numerical Algorithms, ch. 7: residual and backward error; chapter from
+	// memory) and
+	// iterative refinement in the same precision cannot bring it down.
+	// With k₁/k₂ = 3.7e9 (below the pivot test's 1e11) that is about 1e-7,
+	// above MaxResidual: a usable but suspect solve. Twelve load cases with
+	// unrounded loads make a lucky exact cancellation in all of them
+	// implausible on any platform.
+	const soft, ratio = 1234.5, 3.7e9
+	var m springnet.Model
+	b := m.AddNode("b", springnet.Vec{})
+	c := m.AddNode("c", springnet.Vec{X: 0.1})
+	m.AddFoot(b, springnet.Foot{K: springnet.Stiffness6{X: soft, Y: 1e6, Z: 1e6}})
+	m.AddFoot(c, springnet.Foot{K: springnet.Stiffness6{Y: 1e6, Z: 1e6}})
+	m.AddSpring(b, c, springnet.Spring{Axial: soft * ratio})
+	var loads []float64
+	for i := range 12 {
+		f := 987.6 * (1 + 0.37*float64(i))
+		m.AddCaseLoad(m.AddLoadCase(""), c, springnet.Load{FX: f})
+		loads = append(loads, f)
+	}
+	res, err := springnet.Static(&m, nil)
+	var cond *springnet.ConditionError
+	require.ErrorAs(t, err, &cond)
+	require.NotNil(t, res, "a suspect solve still gives its result")
+	assert.Greater(t, cond.Residual, springnet.MaxResidual)
+	assert.Equal(t, res.Residual(), cond.Residual, "the worst case is reported")
+	// Usable: the displacement is that of springs in series,
+	// u_c = F/k₂ + F/k₁ (Hooke's law), to within the forward error,
+	// about k₁/k₂ × 2e-16 ≈ 1e-6 (condition number times round-off);
+	// suspectTol allows ten times that.
+	const suspectTol = 1e-5
+	for i, f := range loads {
+		want := f/soft + f/(soft*ratio)
+		assert.InEpsilon(t, want, res.Case(springnet.CaseID(i)).Displacement(c).UX, suspectTol)
+	}
+	// Sweep passes the condition on with its result.
+	sw, err := springnet.Sweep(&m, nil)
+	require.ErrorAs(t, err, &cond)
+	assert.NotNil(t, sw)
+}
