@@ -1,7 +1,11 @@
 package main
 
 import (
+	"fmt"
+	"io"
+
 	"github.com/trestle-go/trestle/materials"
+	"github.com/trestle-go/trestle/springnet"
 )
 
 func runDemo(e env) error {
@@ -10,9 +14,10 @@ func runDemo(e env) error {
 small lathe on four loose levelling feet) and prints the full report:
 governing numbers, mount stiffness, load share, member forces and
 utilisation, checks and cautions. Works from any folder.`,
-		"trestle demo\ntrestle demo --units us\ntrestle demo --json > demo.json", e)
+		"trestle demo\ntrestle demo --units us\ntrestle demo --picture demo.svg\ntrestle demo --json > demo.json", e)
 	var of outputFlags
 	of.add(fl)
+	picture := fl.String("picture", "", "also draw the case with the largest displacement to this `file` (.svg or .png)")
 	pos, err := fl.parse(e.args)
 	if err != nil {
 		return handled(err)
@@ -32,6 +37,9 @@ utilisation, checks and cautions. Works from any folder.`,
 	if err != nil {
 		return err
 	}
+	if err := reportPicture(e, a, *picture, nil); err != nil {
+		return err
+	}
 	if of.json {
 		return writeJSON(e.stdout, a.report)
 	}
@@ -49,6 +57,7 @@ Governing numbers come first, details after.`,
 	var of outputFlags
 	of.add(fl)
 	level := fl.String("level", "nominal", "material values: `low`, nominal or high")
+	picture := fl.String("picture", "", "also draw the case with the largest displacement to this `file` (.svg or .png)")
 	pos, err := fl.parse(e.args)
 	if err != nil {
 		return handled(err)
@@ -72,9 +81,36 @@ Governing numbers come first, details after.`,
 	if err != nil {
 		return err
 	}
+	if err := reportPicture(e, a, *picture, pos); err != nil {
+		return err
+	}
 	if of.json {
 		return writeJSON(e.stdout, a.report)
 	}
 	writeAnalysis(e.stdout, a.report, u)
+	return nil
+}
+
+// reportPicture draws the case with the largest displacement of a to
+// path (nothing when path is ""), refusing to overwrite any of inputs. It
+// says where it wrote on standard error, so that standard output stays
+// the report (or its JSON).
+func reportPicture(e env, a *analysed, path string, inputs []string) error {
+	if path == "" {
+		return nil
+	}
+	format, err := pictureFormat(path, "")
+	if err != nil {
+		return err
+	}
+	c := springnet.CaseID(0)
+	if id, ok := a.model.Case(a.report.Governing.MaxDisplacementCase); ok {
+		c = id
+	}
+	s := sceneOf(a, c, 0)
+	if err := writeAtomic(path, inputs, func(w io.Writer) error { return writeScene(w, &s, format) }); err != nil {
+		return err
+	}
+	fmt.Fprintf(e.stderr, "trestle: picture of case %q written to %s\n", a.model.CaseName(c), path)
 	return nil
 }

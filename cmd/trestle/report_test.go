@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"encoding/json"
 	"math"
+	"os"
 	"strings"
 	"testing"
 
@@ -209,6 +210,16 @@ func TestDemoEndToEnd(t *testing.T) {
 		sum += f.FZN
 	}
 	assert.InEpsilon(t, -rep.Cases[0].Equilibrium.AppliedN[2], sum, 1e-9)
+
+	// --picture draws the case with the largest displacement beside the
+	// report, leaving standard output to the report.
+	p := trestle(t, "", "demo", "--picture", "demo.svg")
+	require.NoError(t, p.err)
+	assert.Equal(t, r.stdout, p.stdout)
+	assert.Contains(t, p.stderr, "demo.svg")
+	data, err := os.ReadFile("demo.svg")
+	require.NoError(t, err)
+	assert.Len(t, svgMembers(t, data), len(rep.Cases[0].Members), "every member drawn")
 }
 
 func TestTiedSoftestDirection(t *testing.T) {
