@@ -1,7 +1,9 @@
 package ringdown
 
 import (
+	"fmt"
 	"math/rand/v2"
+	"strings"
 	"testing"
 	"time"
 )
@@ -24,4 +26,22 @@ func BenchmarkReduce1M(b *testing.B) {
 		}
 	}
 	b.ReportMetric(float64(cpuTime()-cpu0)/float64(time.Millisecond)/float64(b.N), "cpu-ms/op")
+}
+
+// BenchmarkRead1M reads a one-million-line CSV file (time and three axes,
+// 42 MB).
+func BenchmarkRead1M(b *testing.B) {
+	var sb strings.Builder
+	sb.WriteString("time,ax,ay,az\n")
+	for i := range 1_000_000 {
+		fmt.Fprintf(&sb, "%.6f,%.5f,%.5f,%.5f\n", float64(i)*5e-5, 0.01*float64(i%17), 9.81, -0.02*float64(i%13))
+	}
+	text := sb.String()
+	b.SetBytes(int64(len(text)))
+	b.ReportAllocs()
+	for b.Loop() {
+		if _, err := Read(strings.NewReader(text), ReadOptions{Column: "az"}); err != nil {
+			b.Fatal(err)
+		}
+	}
 }

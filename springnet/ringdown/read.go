@@ -53,7 +53,8 @@ type column struct {
 // line is one content line of the file.
 type line struct {
 	num    int      // 1-based line number in the file
-	fields []string // trimmed fields
+	text   string   // the line, trimmed
+	fields []string // its trimmed fields, once split
 }
 
 // Read reads a ring-down record from a CSV or TSV file: fields separated by
@@ -83,78 +84,117 @@ func Read(r io.Reader, opt ReadOptions) (Record, error) {
 	if bad(opt.TimeUnit) || opt.TimeUnit < 0 {
 		return Record{}, fmt.Errorf("ringdown: %s: time unit %g s is not positive and finite", name, opt.TimeUnit)
 	}
-	lines, err := readLines(r, name)
-	if err != nil {
-		return Record{}, err
+	src := newLineSource(r, name)
+	// The head of the file: every line up to the 50th that starts like a
+	// number decides the separator, the header and the units.
+	var head []line
+	numeric := 0
+	for numeric < 50 {
+		l, ok, err := src.next()
+		if err != nil {
+			return Record{}, err
+		}
+		if !ok {
+			break
+		}
+		head = append(head, l)
+		if startsLikeNumber(l.text) {
+			numeric++
+		}
 	}
-	if len(lines) == 0 {
+	if len(head) == 0 {
 		return Record{}, fmt.Errorf("ringdown: %s: empty file: no data lines", name)
 	}
-	sep := detectSeparator(lines)
-	for i := range lines {
-		lines[i].fields = splitFields(lines[i].raw(), sep)
+	sep := detectSeparator(head)
+	for i := range head {
+		head[i].fields = splitFields(nil, head[i].text, sep)
 	}
 	// Leading text lines (no field is a number) are preamble, header and units.
 	first := 0
-	for first < len(lines) && isTextLine(lines[first].fields) {
-		first++
-	}
-	if first == len(lines) {
-		return Record{}, fmt.Errorf("ringdown: %s: no data lines, only %d line(s) of text", name, len(lines))
+	for {
+		for first < len(head) && isTextLine(head[first].fields) {
+			first++
+		}
+		if first < len(head) {
+			break
+		}
+		l, ok, err := src.next()
+		if err != nil {
+			return Record{}, err
+		}
+		if !ok {
+			return Record{}, fmt.Errorf("ringdown: %s: no data lines, only %d line(s) of text", name, len(head))
+		}
+		l.fields = splitFields(nil, l.text, sep)
+		head = append(head, l)
 	}
 	// A separator at the end of every line leaves an empty last field: drop
 	// it when the first data line has one.
-	if f := lines[first].fields; len(f) > 1 && f[len(f)-1] == "" {
-		for i := range lines {
-			if f := lines[i].fields; len(f) > 1 && f[len(f)-1] == "" {
-				lines[i].fields = f[:len(f)-1]
-			}
+	f := head[first].fields
+	trailing := len(f) > 1 && f[len(f)-1] == ""
+	if trailing {
+		for i := range head {
+			head[i].fields = dropTrailing(head[i].fields)
 		}
 	}
-	data := lines[first:]
-	ncol := len(data[0].fields)
-	cols, header := headerColumns(lines[:first], ncol)
-	rd := reader{name: name, opt: opt, cols: cols, hasHeader: header >= 0}
-	return rd.read(data)
+	ncol := len(head[first].fields)
+	cols, header := headerColumns(head[:first], ncol)
+	rd := reader{name: name, opt: opt, cols: cols, hasHeader: header >= 0, sep: sep, trailing: trailing}
+	return rd.read(head[first:], src)
+}
+
+// dropTrailing drops an empty last field (from a trailing separator).
+func dropTrailing(f []string) []string {
+	if len(f) > 1 && f[len(f)-1] == "" {
+		return f[:len(f)-1]
+	}
+	return f
+}
+
+// startsLikeNumber reports whether s begins with a digit, sign or point.
+func startsLikeNumber(s string) bool {
+	c := s[0]
+	return c >= '0' && c <= '9' || c == '-' || c == '+' || c == '.'
 }
 
 // bad reports whether v is NaN or infinite.
 func bad(v float64) bool { return math.IsNaN(v) || math.IsInf(v, 0) }
 
-// raw returns the line's text before splitting (kept in fields[0]).
-func (l line) raw() string {
-	if len(l.fields) == 0 {
-		return ""
-	}
-	return l.fields[0]
+// lineSource yields the non-blank, non-comment lines of a file with their
+// numbers.
+type lineSource struct {
+	sc   *bufio.Scanner
+	name string
+	num  int // number of the last line read
 }
 
-// readLines returns the non-blank, non-comment lines with their numbers; the
-// whole text of each line is kept in fields[0] until it is split.
-func readLines(r io.Reader, name string) ([]line, error) {
+func newLineSource(r io.Reader, name string) *lineSource {
 	sc := bufio.NewScanner(r)
 	sc.Buffer(make([]byte, 0, 64*1024), maxLineBytes)
-	var out []line
-	num := 0
-	for sc.Scan() {
-		num++
-		s := sc.Text()
-		if num == 1 {
-			s = strings.TrimPrefix(s, "\uFEFF") // byte-order mark
+	return &lineSource{sc: sc, name: name}
+}
+
+// next returns the next content line; ok is false at the end of the input.
+func (s *lineSource) next() (l line, ok bool, err error) {
+	for s.sc.Scan() {
+		s.num++
+		t := s.sc.Text()
+		if s.num == 1 {
+			t = strings.TrimPrefix(t, "\uFEFF") // byte-order mark
 		}
-		t := strings.TrimSpace(s)
+		t = strings.TrimSpace(t)
 		if t == "" || strings.HasPrefix(t, "#") || strings.HasPrefix(t, "//") {
 			continue
 		}
-		out = append(out, line{num: num, fields: []string{t}})
+		return line{num: s.num, text: t}, true, nil
 	}
-	if err := sc.Err(); err != nil {
+	if err := s.sc.Err(); err != nil {
 		if errors.Is(err, bufio.ErrTooLong) {
-			return nil, fmt.Errorf("ringdown: %s:%d: line longer than %d bytes", name, num+1, maxLineBytes)
+			return line{}, false, fmt.Errorf("ringdown: %s:%d: line longer than %d bytes", s.name, s.num+1, maxLineBytes)
 		}
-		return nil, fmt.Errorf("ringdown: %s: %w", name, err)
+		return line{}, false, fmt.Errorf("ringdown: %s: %w", s.name, err)
 	}
-	return out, nil
+	return line{}, false, nil
 }
 
 // detectSeparator picks tab, semicolon or comma, in that order of
@@ -163,7 +203,7 @@ func readLines(r io.Reader, name string) ([]line, error) {
 func detectSeparator(lines []line) rune {
 	var sample []line
 	for _, l := range lines {
-		if c := l.raw()[0]; c >= '0' && c <= '9' || c == '-' || c == '+' || c == '.' {
+		if startsLikeNumber(l.text) {
 			sample = append(sample, l)
 			if len(sample) == 50 {
 				break
@@ -175,7 +215,7 @@ func detectSeparator(lines []line) rune {
 	}
 	for _, sep := range []string{"\t", ";", ","} {
 		for _, l := range sample {
-			if strings.Contains(l.raw(), sep) {
+			if strings.Contains(l.text, sep) {
 				return rune(sep[0])
 			}
 		}
@@ -183,27 +223,38 @@ func detectSeparator(lines []line) rune {
 	return 0
 }
 
-// splitFields splits s at sep (white space when sep is 0), trims each field
-// and its quotes, and turns a decimal comma into a point when sep is not a
-// comma.
-func splitFields(s string, sep rune) []string {
-	var f []string
+// splitFields splits s at sep (runs of white space when sep is 0) into
+// dst[:0], trims each field and its quotes, and turns a decimal comma into
+// a point when sep is not a comma. Fields are substrings of s.
+func splitFields(dst []string, s string, sep rune) []string {
+	dst = dst[:0]
 	if sep == 0 {
-		f = strings.Fields(s)
-	} else {
-		f = strings.Split(s, string(sep))
-	}
-	for i, v := range f {
-		v = strings.TrimSpace(v)
-		if len(v) >= 2 && v[0] == '"' && v[len(v)-1] == '"' {
-			v = strings.TrimSpace(v[1 : len(v)-1])
+		for f := range strings.FieldsSeq(s) {
+			dst = append(dst, cleanField(f, sep))
 		}
-		if sep != ',' && strings.Contains(v, ",") && !strings.Contains(v, ".") {
-			v = strings.Replace(v, ",", ".", 1)
-		}
-		f[i] = v
+		return dst
 	}
-	return f
+	for {
+		i := strings.IndexRune(s, sep)
+		if i < 0 {
+			return append(dst, cleanField(s, sep))
+		}
+		dst = append(dst, cleanField(s[:i], sep))
+		s = s[i+1:]
+	}
+}
+
+// cleanField trims a field and its quotes and turns a decimal comma into a
+// point when sep is not a comma.
+func cleanField(v string, sep rune) string {
+	v = strings.TrimSpace(v)
+	if len(v) >= 2 && v[0] == '"' && v[len(v)-1] == '"' {
+		v = strings.TrimSpace(v[1 : len(v)-1])
+	}
+	if sep != ',' && strings.Contains(v, ",") && !strings.Contains(v, ".") {
+		v = strings.Replace(v, ",", ".", 1)
+	}
+	return v
 }
 
 // parseNumber parses a finite decimal number.
@@ -371,7 +422,9 @@ type reader struct {
 	opt       ReadOptions
 	cols      []column
 	hasHeader bool
-	chosen    int // the signal column (the first axis for Magnitude)
+	chosen    int  // the signal column (the first axis for Magnitude)
+	sep       rune // field separator (0: white space)
+	trailing  bool // lines end with a separator
 	notes     []string
 }
 
@@ -380,14 +433,10 @@ func (rd *reader) where(lnum, col int) string {
 	return fmt.Sprintf("%s:%d: column %d (%q)", rd.name, lnum, col+1, rd.cols[col].name)
 }
 
-func (rd *reader) read(data []line) (Record, error) {
+// read parses the data lines: those already split in data, then the rest
+// of src, keeping only the columns in use.
+func (rd *reader) read(data []line, src *lineSource) (Record, error) {
 	ncol := len(rd.cols)
-	for _, l := range data {
-		if len(l.fields) != ncol {
-			return Record{}, fmt.Errorf("ringdown: %s:%d: %d fields, expected %d like line %d",
-				rd.name, l.num, len(l.fields), ncol, data[0].num)
-		}
-	}
 	timeCol := -1
 	if rd.opt.SampleRate == 0 {
 		timeCol = rd.findTime()
@@ -396,34 +445,61 @@ func (rd *reader) read(data []line) (Record, error) {
 	if err != nil {
 		return Record{}, err
 	}
-	// Parse the columns in use.
 	need := slices.Clone(sigCols)
 	if timeCol >= 0 {
 		need = append(need, timeCol)
 	}
+	slices.Sort(need)
+	need = slices.Compact(need)
 	values := make([][]float64, ncol)
-	for _, c := range need {
-		if values[c] != nil {
-			continue
+	var nums []int // line number of each sample
+	firstNum := data[0].num
+	parse := func(l line) error {
+		if len(l.fields) != ncol {
+			return fmt.Errorf("ringdown: %s:%d: %d fields, expected %d like line %d",
+				rd.name, l.num, len(l.fields), ncol, firstNum)
 		}
-		v := make([]float64, len(data))
-		for i, l := range data {
+		for _, c := range need {
 			x, ok := parseNumber(l.fields[c])
 			if !ok {
 				if l.fields[c] == "" {
-					return Record{}, fmt.Errorf("ringdown: %s: empty field, expected a number", rd.where(l.num, c))
+					return fmt.Errorf("ringdown: %s: empty field, expected a number", rd.where(l.num, c))
 				}
-				return Record{}, fmt.Errorf("ringdown: %s: %q is not a finite number", rd.where(l.num, c), l.fields[c])
+				return fmt.Errorf("ringdown: %s: %q is not a finite number", rd.where(l.num, c), l.fields[c])
 			}
-			v[i] = x
+			values[c] = append(values[c], x)
 		}
-		values[c] = v
+		nums = append(nums, l.num)
+		return nil
 	}
-	if len(data) < MinSamples {
+	for _, l := range data {
+		if err := parse(l); err != nil {
+			return Record{}, err
+		}
+	}
+	var buf []string
+	for {
+		l, ok, err := src.next()
+		if err != nil {
+			return Record{}, err
+		}
+		if !ok {
+			break
+		}
+		buf = splitFields(buf, l.text, rd.sep)
+		l.fields = buf
+		if rd.trailing {
+			l.fields = dropTrailing(l.fields)
+		}
+		if err := parse(l); err != nil {
+			return Record{}, err
+		}
+	}
+	if len(nums) < MinSamples {
 		return Record{}, fmt.Errorf("ringdown: %s: only %d samples (lines %d–%d); need at least %d",
-			rd.name, len(data), data[0].num, data[len(data)-1].num, MinSamples)
+			rd.name, len(nums), nums[0], nums[len(nums)-1], MinSamples)
 	}
-	sig, err := rd.signal(values, sigCols, data)
+	sig, err := rd.signal(values, sigCols, nums)
 	if err != nil {
 		return Record{}, err
 	}
@@ -434,7 +510,7 @@ func (rd *reader) read(data []line) (Record, error) {
 		if rec.Rate == 0 {
 			return Record{}, fmt.Errorf("ringdown: %s: no time column and no sample rate given", rd.name)
 		}
-	} else if err := rd.timeBase(&rec, values[timeCol], timeCol, data); err != nil {
+	} else if err := rd.timeBase(&rec, values[timeCol], timeCol, nums); err != nil {
 		return Record{}, err
 	}
 	rec.Notes = rd.notes
@@ -548,14 +624,14 @@ func isTimeName(n string) bool {
 // signal builds the signal from the parsed columns: the magnitude of three
 // axes, the one chosen column, or the column with the largest standard
 // deviation among the candidates.
-func (rd *reader) signal(values [][]float64, cols []int, data []line) ([]float64, error) {
+func (rd *reader) signal(values [][]float64, cols []int, nums []int) ([]float64, error) {
 	if rd.opt.Magnitude {
 		x, y, z := values[cols[0]], values[cols[1]], values[cols[2]]
 		out := make([]float64, len(x))
 		for i := range out {
 			out[i] = math.Sqrt(x[i]*x[i] + y[i]*y[i] + z[i]*z[i])
 			if bad(out[i]) {
-				return nil, fmt.Errorf("ringdown: %s:%d: magnitude overflows", rd.name, data[i].num)
+				return nil, fmt.Errorf("ringdown: %s:%d: magnitude overflows", rd.name, nums[i])
 			}
 		}
 		rd.chosen = cols[0]
@@ -619,7 +695,7 @@ func (rd *reader) signalUnit(cols []int, sig []float64) (unit, desc string) {
 
 // timeBase sets Start and Rate from the time column, checking that time
 // advances, averaging repeated timestamps and resampling uneven steps.
-func (rd *reader) timeBase(rec *Record, t []float64, col int, data []line) error {
+func (rd *reader) timeBase(rec *Record, t []float64, col int, nums []int) error {
 	// Work relative to the first timestamp so epoch times keep precision.
 	t0 := t[0]
 	rel := make([]float64, len(t))
@@ -627,7 +703,7 @@ func (rd *reader) timeBase(rec *Record, t []float64, col int, data []line) error
 		rel[i] = t[i] - t0
 		if i > 0 && rel[i] < rel[i-1] {
 			return fmt.Errorf("ringdown: %s: time %g runs backwards (previous %g at line %d)",
-				rd.where(data[i].num, col), t[i], t[i-1], data[i-1].num)
+				rd.where(nums[i], col), t[i], t[i-1], nums[i-1])
 		}
 	}
 	x := rec.Samples
