@@ -66,7 +66,10 @@ func TestMemberUtilisation(t *testing.T) {
 		})
 	}
 	t.Run("round bar, resultant moment", func(t *testing.T) {
-		// Round section: σ = N/A + √(My² + Mz²)/S, S = π·d³/32.
+		// Round section: every diameter is a principal axis, so the
+		// resultant moment bends it, σ = N/A + √(My² + Mz²)/S with
+		// S = π·d³/32 (Gere & Goodno, Mechanics of Materials, bending of
+		// circular sections; App. D).
 		const d, p, q = 0.04, 300.0, 400.0
 		m, tip, e := beamCantilever(springnet.Vec{X: 1}, l, springnet.Beam{Material: beamSteel(), Section: sections.Round{D: d}})
 		m.AddLoad(tip, springnet.Load{FY: q, FZ: p})

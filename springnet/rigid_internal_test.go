@@ -13,8 +13,10 @@ import (
 // TestRigidMotionNoForce: a rigid-body motion of the whole model (a
 // translation t plus a small rotation ω: u = t + ω × x, θ = ω) strains
 // nothing, so every element force is zero (a property of any consistent
-// stiffness matrix, e.g. Cook et al., Concepts and Applications of Finite
-// Element Analysis, 4th ed., §2.x on rigid-body modes).
+// stiffness matrix: its null space holds the rigid-body modes; Cook,
+// Malkus, Plesha & Witt, Concepts and Applications of Finite Element
+// Analysis, 4th ed., on rigid-body motion of elements; section from
+// memory).
 func TestRigidMotionNoForce(t *testing.T) {
 	var m Model
 	var nodes []NodeID

@@ -71,12 +71,13 @@ func across(dir springnet.Vec) [2]springnet.Vec {
 }
 
 func TestConcretePier(t *testing.T) {
-	// Common practice: a concrete pier of A = 0.0936 m², E = 20 GPa,
-	// L = 0.8 m has k = A·E/L = 2.34e9 N/m; two in parallel under a rigid
-	// top give twice that.
+	// A concrete pier as a bar, A = 0.312 × 0.3 = 0.0936 m², E = 20 GPa,
+	// L = 0.8 m: k = E·A/L = 2.34e9 N/m (Hooke's law; Gere & Goodno,
+	// Mechanics of Materials, §2.2); two in parallel under a rigid top
+	// give twice that (springs in parallel add).
 	conc := materials.Material{Name: "concrete", E: materials.Exact(20e9), Density: 2400}
-	sec := sections.Rect{B: 0.312, H: 0.3} // 0.312 × 0.3 = 0.0936 m²
-	const want1 = 2.34e9
+	sec := sections.Rect{B: 0.312, H: 0.3}
+	const want1 = 20e9 * 0.312 * 0.3 / 0.8
 	for _, n := range []int{1, 2} {
 		var m springnet.Model
 		var tops []springnet.NodeID
