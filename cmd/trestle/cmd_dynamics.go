@@ -1,12 +1,13 @@
 package main
 
 import (
+	"encoding/csv"
 	"errors"
 	"fmt"
 	"io"
 	"math"
+	"strconv"
 
-	"github.com/trestle-go/trestle/materials"
 	"github.com/trestle-go/trestle/springnet"
 	"github.com/trestle-go/trestle/springnet/draw"
 )
@@ -332,27 +333,26 @@ func writeResponse(w io.Writer, r ResponseReport, u unitSystem) {
 	tw.Flush()
 }
 
-// writeResponseCSV writes one row per frequency: the receptance magnitude
-// [m/N] of every probe.
+// writeResponseCSV writes one row per frequency: the receptance
+// magnitude [m/N] and phase [rad] of every probe.
 func writeResponseCSV(w io.Writer, r ResponseReport) error {
 	if len(r.Probes) == 0 {
 		return nil
 	}
-	fmt.Fprintf(w, "frequency_hz")
+	cw := csv.NewWriter(w)
+	head := []string{"frequency_hz"}
 	for _, p := range r.Probes {
-		fmt.Fprintf(w, ",%s %s receptance_m_per_n,%s %s phase_rad", p.Place, p.Direction, p.Place, p.Direction)
+		head = append(head, p.Place+" "+p.Direction+" receptance_m_per_n", p.Place+" "+p.Direction+" phase_rad")
 	}
-	fmt.Fprintln(w)
+	cw.Write(head)
+	g := func(v float64) string { return strconv.FormatFloat(v, 'g', 6, 64) }
 	for j, f := range r.Probes[0].FrequencyHz {
-		fmt.Fprintf(w, "%.6g", f)
+		row := []string{g(f)}
 		for _, p := range r.Probes {
-			fmt.Fprintf(w, ",%.6g,%.6g", p.ReceptanceMPerN[j], p.PhaseRad[j])
+			row = append(row, g(p.ReceptanceMPerN[j]), g(p.PhaseRad[j]))
 		}
-		if _, err := fmt.Fprintln(w); err != nil {
-			return err
-		}
+		cw.Write(row)
 	}
-	return nil
+	cw.Flush()
+	return cw.Error()
 }
-
-var _ = materials.Nominal
