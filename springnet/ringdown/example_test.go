@@ -78,7 +78,14 @@ func ExampleReduce_band() {
 }
 
 func ExampleWithMeasuredLoss() {
-	res, err := ringdown.Reduce(dampedSine(1000, 4, 25, 0.01, 0), nil)
+	// A 25 Hz mode with a weaker 90 Hz one riding on it: the methods differ
+	// a little, which widens the measured range.
+	rec := dampedSine(1000, 4, 25, 0.01, 0)
+	other := dampedSine(1000, 4, 90, 0.03, 0)
+	for i := range rec.Samples {
+		rec.Samples[i] += 0.2 * other.Samples[i]
+	}
+	res, err := ringdown.Reduce(rec, nil)
 	if err != nil {
 		fmt.Println(err)
 		return
@@ -88,6 +95,6 @@ func ExampleWithMeasuredLoss() {
 	fmt.Printf("loss factor %.3g (%.3g–%.3g)\n", measured.Loss.Nominal, measured.Loss.Low, measured.Loss.High)
 	fmt.Println(measured.Sources[0].Figure)
 	// Output:
-	// loss factor 0.02 (0.02–0.02)
+	// loss factor 0.02 (0.0199–0.0201)
 	// loss
 }

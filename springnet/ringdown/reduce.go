@@ -17,8 +17,8 @@ type Settings struct {
 	// Band isolates one mode with a zero-phase band-pass [Hz] before the
 	// envelope and the fits; the mode is looked for inside it. Zero: none.
 	Band Band
-	// Centre, when Band is zero, isolates the mode nearest this frequency
-	// [Hz] with the band Centre·(1 ± Width). Zero: none.
+	// Centre, when Band is zero, isolates the band Centre·(1 ± Width) [Hz]
+	// and reduces the strongest mode inside it. Zero: none.
 	Centre float64
 	// Width is the half-width of the band around Centre as a fraction of it.
 	// Zero: 0.2.
