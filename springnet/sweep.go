@@ -92,12 +92,44 @@ type SweepResult struct {
 	// MemberResult.Utilisation) of any bar or beam in any case; 0 where
 	// no member has a rated strength.
 	MaxUtilisation Spread
+	// EulerMargin is the lowest Euler margin of a member on its own
+	// (EulerCheck.Margin of a compressed member with a critical load) over
+	// members and cases; set only when HasEulerMargin, which is true
+	// when such a member exists at every level.
+	EulerMargin    Spread
+	HasEulerMargin bool
+	// Tipping is the lowest tipping factor (Tipping.Factor where Found)
+	// over the cases of a stand on compression-only feet; set only when
+	// HasTipping, which is true when some case tips at every level.
+	Tipping    Spread
+	HasTipping bool
 	// Buckling is the lowest positive whole-frame buckling load factor
-	// over the cases; it is set only when Buckled is true.
-	Buckling Spread
-	// Buckled is true when buckling was asked for (SweepSettings.Buckling)
-	// and some case has a positive load factor at every level.
-	Buckled bool
+	// over the cases; set only when HasBuckling, which is true when
+	// buckling was asked for (SweepSettings.Buckling) and some case has a
+	// positive load factor at every level.
+	Buckling    Spread
+	HasBuckling bool
+}
+
+// lowest collects the smallest value per level of a governing number
+// that may be missing.
+type lowest struct {
+	v     [3]float64
+	found [3]bool
+}
+
+func (w *lowest) take(level int, v float64) {
+	if !w.found[level] || v < w.v[level] {
+		w.v[level], w.found[level] = v, true
+	}
+}
+
+// spread returns the Spread and whether a value was found at every level.
+func (w *lowest) spread() (Spread, bool) {
+	if !w.found[0] || !w.found[1] || !w.found[2] {
+		return Spread{}, false
+	}
+	return spreadOf(w.v), true
 }
 
 // Sweep analyses m at each material level (materials.Levels: every
@@ -107,7 +139,9 @@ type SweepResult struct {
 // Static (every case), the mount stiffness at each place (one
 // factorisation per level for all places, every foot in contact, as in
 // MountStiffness) and, if asked, Buckling of every case. It returns the
-// governing numbers as Spreads.
+// governing numbers as Spreads: mount stiffness along X, Y, Z and the
+// softest principal one, the largest displacement and utilisation, the
+// lowest member Euler margin, tipping factor and buckling factor.
 //
 // Errors are those of the analyses, wrapped with the level; no result is
 // returned then. A solve whose residual exceeds MaxResidual gives the
@@ -140,9 +174,9 @@ func (s *Solver) Sweep(m *Model, st *SweepSettings) (*SweepResult, error) {
 		}
 		return err
 	}
-	var disp, util, buck [3]float64
+	var disp, util [3]float64
+	var euler, tip, buck lowest
 	var mr []MemberResult
-	buckled := st.Buckling
 	for li, l := range materials.Levels {
 		wrap := func(err error) error {
 			return fmt.Errorf("springnet: sweep at %v material values: %w", l, err)
@@ -161,6 +195,12 @@ func (s *Solver) Sweep(m *Model, st *SweepSettings) (*SweepResult, error) {
 			}
 			for i := range mr {
 				util[li] = math.Max(util[li], mr[i].Utilisation)
+				if b := mr[i].Buckling; b.Rated && b.Compressed && b.Margin > 0 {
+					euler.take(li, b.Margin)
+				}
+			}
+			if tp := cr.Tipping(); tp.Found {
+				tip.take(li, tp.Factor)
 			}
 		}
 
@@ -186,7 +226,6 @@ func (s *Solver) Sweep(m *Model, st *SweepSettings) (*SweepResult, error) {
 		}
 
 		if st.Buckling {
-			found := false
 			for c := range m.cases {
 				br, err := s.Buckling(m, CaseID(c), &BucklingSettings{Modes: 1, Level: l})
 				var few *FewerFactorsError
@@ -196,18 +235,15 @@ func (s *Solver) Sweep(m *Model, st *SweepSettings) (*SweepResult, error) {
 				if err = keep(err); err != nil {
 					return nil, wrap(err)
 				}
-				if f := br.Factor(0); !found || f < buck[li] {
-					buck[li], found = f, true
-				}
+				buck.take(li, br.Factor(0))
 			}
-			buckled = buckled && found
 		}
 	}
 	res.MaxDisplacement = spreadOf(disp)
 	res.MaxUtilisation = spreadOf(util)
-	if buckled {
-		res.Buckling, res.Buckled = spreadOf(buck), true
-	}
+	res.EulerMargin, res.HasEulerMargin = euler.spread()
+	res.Tipping, res.HasTipping = tip.spread()
+	res.Buckling, res.HasBuckling = buck.spread()
 	for pi, p := range places {
 		ms := &res.Mounts[pi]
 		ms.Place, ms.Name = p, m.PlaceName(p)

@@ -77,7 +77,7 @@ func TestSweepBarOverLevels(t *testing.T) {
 	assert.Equal(t, res.MaxDisplacement.At(materials.Low), res.MaxDisplacement.Range.High)
 	assert.Equal(t, res.MaxDisplacement.At(materials.Nominal), res.MaxDisplacement.Range.Nominal)
 	assert.NoError(t, res.MaxDisplacement.Range.Check())
-	assert.False(t, res.Buckled, "buckling not asked for")
+	assert.False(t, res.HasBuckling, "buckling not asked for")
 }
 
 func TestSweepBucklingLinearInE(t *testing.T) {
@@ -100,7 +100,7 @@ func TestSweepBucklingLinearInE(t *testing.T) {
 	res, err := springnet.Sweep(&m, &springnet.SweepSettings{Buckling: true, Places: []springnet.Place{}})
 	require.NoError(t, err)
 	assert.Empty(t, res.Mounts, "an empty Places measures nothing")
-	require.True(t, res.Buckled)
+	require.True(t, res.HasBuckling)
 	for i, lv := range materials.Levels {
 		want := math.Pi * math.Pi * mat.E.At(lv) * iWeak / (4 * l * l) / p
 		assert.InEpsilon(t, want, res.Buckling.ByLevel[i], eulerTol, lv.String())
@@ -120,6 +120,41 @@ func TestSweepTensionOnlyHasNoBuckling(t *testing.T) {
 	m.AddLoad(bot, springnet.Load{FZ: -1e3})
 	res, err := springnet.Sweep(&m, &springnet.SweepSettings{Buckling: true})
 	require.NoError(t, err)
-	assert.False(t, res.Buckled)
+	assert.False(t, res.HasBuckling)
 	assert.Equal(t, springnet.Spread{}, res.Buckling)
+}
+
+func TestSweepEulerMarginAndTipping(t *testing.T) {
+	t.Run("Euler margin follows E", func(t *testing.T) {
+		// One fixed–free beam under P: margin = π²·E·I/(K·L)²/P with the
+		// design K = 2.1 (AISC 360 Commentary Table C-A-7.1) about the
+		// weak axis, level by level.
+		const l, p, b, h = 1.2, 5e3, 0.04, 0.06
+		iWeak := h * b * b * b / 12
+		mat := spreadSteel()
+		m, tip, _ := beamCantilever(springnet.Vec{Z: 1}, l, springnet.Beam{Material: mat, Section: sections.Rect{B: b, H: h}})
+		m.AddLoad(tip, springnet.Load{FZ: -p})
+		res, err := springnet.Sweep(m, nil)
+		require.NoError(t, err)
+		require.True(t, res.HasEulerMargin)
+		for i, lv := range materials.Levels {
+			want := math.Pi * math.Pi * mat.E.At(lv) * iWeak / (2.1 * l * 2.1 * l) / p
+			assert.InEpsilon(t, want, res.EulerMargin.ByLevel[i], sweepTol, lv.String())
+		}
+		assert.False(t, res.HasTipping, "no compression-only feet")
+	})
+	t.Run("tipping of a rigid stand does not depend on E", func(t *testing.T) {
+		// The stand of TestCompressionOnlyFeet, "along x, all feet down":
+		// λ = W·b/(2·H·P) by rigid-body statics, at every level.
+		const b, d, h, w, p = 0.4, 0.6, 1.5, 1000.0, 100.0
+		m, _ := narrowStand(b, d, h, w, p, 0)
+		res, err := springnet.Sweep(m, nil)
+		require.NoError(t, err)
+		require.True(t, res.HasTipping)
+		for i := range materials.Levels {
+			assert.InEpsilon(t, w*b/(2*h*p), res.Tipping.ByLevel[i], contactTol)
+		}
+		require.Len(t, res.Mounts, 1, "the stand's mount")
+		assert.False(t, res.HasEulerMargin, "no members")
+	})
 }
