@@ -143,6 +143,14 @@ func TestReadFormats(t *testing.T) {
 			rate: 1000, first: []float64{0, 0.1, 0.2}, column: "a",
 		},
 		{
+			name: "a phone app's export: quoted names with units, an absolute column",
+			text: "\"Time (s)\",\"Acceleration x (m/s^2)\",\"Acceleration y (m/s^2)\",\"Acceleration z (m/s^2)\",\"Absolute acceleration (m/s^2)\"\n" +
+				rows(n, ",", 0.0025, func(i int) []float64 { return []float64{float64(i), 2 * float64(i), 3 * float64(i), 99} }, false),
+			// |(i, 2i, 3i)| = i√14; the absolute column is not an axis.
+			opt: ReadOptions{Magnitude: true}, rate: 400, first: []float64{0, math.Sqrt(14), 2 * math.Sqrt(14)},
+			column: "|(Acceleration x, Acceleration y, Acceleration z)|", unit: "m/s²",
+		},
+		{
 			name: "epoch milliseconds keep their precision",
 			text: "timestamp_ms,a\n" + func() string {
 				var b strings.Builder

@@ -253,6 +253,26 @@ func TestReduceMeasuresAreConsistent(t *testing.T) {
 		[]string{res.Methods()[0].Method, res.Methods()[1].Method, res.Methods()[2].Method, res.Methods()[3].Method})
 }
 
+func TestReduceRecordTime(t *testing.T) {
+	// The same samples starting at t = 100 s: the same mode, the window
+	// shifted by 100 s, and a given window read in record time.
+	s := synth{Rate: 1000, Duration: 4, Strike: 0.2, Modes: []mode{{F: 25, Zeta: 0.01, A: 2, Phi: 0.3}}, SNR: 40}
+	rec := s.record(rand.New(rand.NewPCG(1, 1)))
+	a, err := Reduce(rec, nil)
+	require.NoError(t, err)
+	rec.Start = 100
+	b, err := Reduce(rec, nil)
+	require.NoError(t, err)
+	assert.InDelta(t, a.Window().Start+100, b.Window().Start, 1e-9)
+	assert.InDelta(t, a.Ratio().Value, b.Ratio().Value, 1e-12*a.Ratio().Value)
+	c, err := Reduce(rec, &Settings{Window: Span{100.5, 101.5}})
+	require.NoError(t, err)
+	assert.InDelta(t, 100.5, c.Window().Start, 1/s.Rate)
+	assert.InDelta(t, 101.5, c.Window().End, 1/s.Rate)
+	// 25 cycles of the mode in that second (less a sample).
+	assert.InDelta(t, 25, c.Window().Cycles, 0.05)
+}
+
 func TestReduceFlagsDisagreement(t *testing.T) {
 	// Two modes 8 % apart with no band: the beat makes the envelope wander,
 	// and the half-power width of the merged peak cannot match the time-

@@ -113,10 +113,10 @@ func (r Result) Q() Estimate { return r.q }
 func (r Result) SpecificCapacity() Estimate { return r.psi }
 
 // Damping returns the nominal damping in every measure (materials.FromRatio
-// of the nominal ζ).
+// of the nominal ζ); the zero Damping for a Result not from Reduce.
 func (r Result) Damping() materials.Damping {
 	d, err := materials.FromRatio(r.zeta.Value)
-	if err != nil {
+	if err != nil || !(r.zeta.Value > 0) {
 		return materials.Damping{}
 	}
 	return d
