@@ -102,7 +102,9 @@ func analyse(m *springnet.Model, name string, l materials.Level, dyn dynamics) (
 	a := &analysed{model: m, static: res, report: rep}
 	a.modes, rep.Modes, rep.Warnings = modes(m, l, dyn, rep.Warnings)
 	rep.Governing = governing(rep)
-	rep.Warnings = append(rep.Warnings, alerts(rep)...)
+	// Safety first: lifted feet, uplift, tipping and overstress before
+	// resonance and solver notes.
+	rep.Warnings = append(alerts(rep), rep.Warnings...)
 	return a, nil
 }
 
@@ -409,7 +411,7 @@ func alerts(rep *AnalysisReport) []string {
 	var w []string
 	g := rep.Governing
 	if len(g.LiftedFeet) > 0 {
-		w = append(w, fmt.Sprintf("LIFTED FEET: %s are out of contact; the stand rocks on the rest", join(g.LiftedFeet)))
+		w = append(w, fmt.Sprintf("LIFTED FEET out of contact: %s; the stand rocks on the others", join(g.LiftedFeet)))
 	}
 	if len(g.UpliftFeet) > 0 {
 		w = append(w, fmt.Sprintf("UPLIFT: %s pull the stand down; they need anchors that carry tension", join(g.UpliftFeet)))

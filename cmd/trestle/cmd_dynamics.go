@@ -154,7 +154,12 @@ speeds given in the file. --picture draws one mode shape.`,
 	return nil
 }
 
+// firstMotion is the motion of the first mode that is not free ("" if
+// none, or m is nil).
 func firstMotion(m *ModesReport) string {
+	if m == nil {
+		return ""
+	}
 	for _, md := range m.Modes {
 		if !md.RigidBody {
 			return md.Motion

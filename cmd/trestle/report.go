@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"io"
 	"math"
+	"strconv"
 	"strings"
 	"text/tabwriter"
 
@@ -36,7 +37,13 @@ func direction(d [3]float64) string {
 			return names[i]
 		}
 	}
-	return fmt.Sprintf("(%.2f, %.2f, %.2f)", d[0], d[1], d[2])
+	var c [3]float64
+	for i, v := range d {
+		if math.Abs(v) >= 0.005 { // no "-0.00"
+			c[i] = v
+		}
+	}
+	return fmt.Sprintf("(%.2f, %.2f, %.2f)", c[0], c[1], c[2])
 }
 
 // smallFloor: relative errors below it are round-off and print as
@@ -95,7 +102,7 @@ func writeAnalysis(w io.Writer, r *AnalysisReport, u unitSystem) {
 		fmt.Fprintf(tw, "  softest mount stiffness\t—\tno mounts or rigid groups in the model\n")
 	}
 	if g.FirstFrequencyHz != nil {
-		fmt.Fprintf(tw, "  first natural frequency\t%s Hz\t\n", num(*g.FirstFrequencyHz))
+		fmt.Fprintf(tw, "  first natural frequency\t%s Hz\t%s\n", num(*g.FirstFrequencyHz), firstMotion(r.Modes))
 	} else {
 		fmt.Fprintf(tw, "  first natural frequency\t—\tno modal result (see warnings)\n")
 	}
@@ -266,7 +273,7 @@ func writeModesTable(w io.Writer, m *ModesReport) {
 			energy = fmt.Sprintf("%s (%s)", md.Energy[0].Group, pct(md.Energy[0].Share))
 		}
 		fmt.Fprintf(tw, "  %d\t%s\t%s\t%s – %s – %s\t%s\t%s\t%s\t%s\t%s\n", md.Number, num(md.FrequencyHz), md.Motion,
-			num(md.LossFactor[0]), num(md.LossFactor[1]), num(md.LossFactor[2]), num(md.DampingRatio),
+			sig3(md.LossFactor[0]), sig3(md.LossFactor[1]), sig3(md.LossFactor[2]), sig3(md.DampingRatio),
 			pct(md.Participation[0]), pct(md.Participation[1]), pct(md.Participation[2]), energy)
 	}
 	tw.Flush()
@@ -293,4 +300,12 @@ func writeModesTable(w io.Writer, m *ModesReport) {
 			tw.Flush()
 		}
 	}
+}
+
+// sig3 formats a damping value with three significant figures.
+func sig3(v float64) string {
+	if v == 0 {
+		return "0"
+	}
+	return strconv.FormatFloat(v, 'g', 3, 64)
 }
