@@ -15,6 +15,8 @@ import (
 	"gonum.org/v1/plot/vg/vgsvg"
 )
 
+var _ fmt.Stringer = Format(0)
+
 // Format is a picture file format.
 type Format int
 
@@ -168,13 +170,12 @@ func (r Result) WritePicture(w io.Writer, f Format) error {
 	return nil
 }
 
-var (
-	colTrace  = color.RGBA{R: 90, G: 90, B: 90, A: 255}
-	colEnv    = color.RGBA{R: 70, G: 130, B: 200, A: 255}
-	colFit    = color.RGBA{R: 210, G: 60, B: 40, A: 255}
-	colWindow = color.NRGBA{R: 255, G: 190, B: 60, A: 70}
-	colBand   = color.NRGBA{R: 100, G: 190, B: 100, A: 60}
-)
+// Colours of the picture (functions, so the package holds no mutable state).
+func colTrace() color.Color  { return color.RGBA{R: 90, G: 90, B: 90, A: 255} }
+func colEnv() color.Color    { return color.RGBA{R: 70, G: 130, B: 200, A: 255} }
+func colFit() color.Color    { return color.RGBA{R: 210, G: 60, B: 40, A: 255} }
+func colWindow() color.Color { return color.NRGBA{R: 255, G: 190, B: 60, A: 70} }
+func colBand() color.Color   { return color.NRGBA{R: 100, G: 190, B: 100, A: 60} }
 
 // shade returns a filled rectangle from x0 to x1 spanning y0 to y1.
 func shade(x0, x1, y0, y1 float64, c color.Color) (*plotter.Polygon, error) {
@@ -203,7 +204,7 @@ func (p picture) recordPlot() (*plot.Plot, error) {
 	if ymax == 0 {
 		ymax = 1
 	}
-	win, err := shade(p.winX[0], p.winX[1], -1.1*ymax, 1.1*ymax, colWindow)
+	win, err := shade(p.winX[0], p.winX[1], -1.1*ymax, 1.1*ymax, colWindow())
 	if err != nil {
 		return nil, fmt.Errorf("ringdown: picture: %w", err)
 	}
@@ -211,13 +212,13 @@ func (p picture) recordPlot() (*plot.Plot, error) {
 	if err != nil {
 		return nil, fmt.Errorf("ringdown: picture: %w", err)
 	}
-	tr.Color = colTrace
+	tr.Color = colTrace()
 	tr.Width = vg.Points(0.5)
 	env, err := plotter.NewLine(p.env)
 	if err != nil {
 		return nil, fmt.Errorf("ringdown: picture: %w", err)
 	}
-	env.Color = colEnv
+	env.Color = colEnv()
 	env.Width = vg.Points(0.8)
 	pl.Add(win, tr, env)
 	pl.Legend.Add("fit window", win)
@@ -244,7 +245,7 @@ func (p picture) recordPlot() (*plot.Plot, error) {
 			return nil, fmt.Errorf("ringdown: picture: %w", err)
 		}
 		for _, l := range []*plotter.Line{up, dn} {
-			l.Color = colFit
+			l.Color = colFit()
 			l.Width = vg.Points(1.2)
 			l.Dashes = []vg.Length{vg.Points(4), vg.Points(2)}
 		}
@@ -263,7 +264,7 @@ func (p picture) spectrumPlot() (*plot.Plot, error) {
 	pl.X.Label.Text = "frequency [Hz]"
 	pl.Y.Label.Text = "amplitude [dB re peak]"
 	if !p.band.IsZero() {
-		b, err := shade(p.band.Low, p.band.High, p.specFloor, 5, colBand)
+		b, err := shade(p.band.Low, p.band.High, p.specFloor, 5, colBand())
 		if err != nil {
 			return nil, fmt.Errorf("ringdown: picture: %w", err)
 		}
@@ -274,7 +275,7 @@ func (p picture) spectrumPlot() (*plot.Plot, error) {
 	if err != nil {
 		return nil, fmt.Errorf("ringdown: picture: %w", err)
 	}
-	sp.Color = colTrace
+	sp.Color = colTrace()
 	sp.Width = vg.Points(0.8)
 	pl.Add(sp)
 	pl.Legend.Add("spectrum", sp)
@@ -290,7 +291,7 @@ func (p picture) spectrumPlot() (*plot.Plot, error) {
 		}
 		return l, nil
 	}
-	m, err := mark(p.f0, colFit, false)
+	m, err := mark(p.f0, colFit(), false)
 	if err != nil {
 		return nil, err
 	}
@@ -298,7 +299,7 @@ func (p picture) spectrumPlot() (*plot.Plot, error) {
 	pl.Legend.Add("mode", m)
 	if p.halfPts != [2]float64{} {
 		for i, x := range p.halfPts {
-			l, err := mark(x, colEnv, true)
+			l, err := mark(x, colEnv(), true)
 			if err != nil {
 				return nil, err
 			}

@@ -8,6 +8,8 @@ import (
 	"github.com/trestle-go/trestle/materials"
 )
 
+var _ fmt.Stringer = Result{}
+
 // Estimate is a measured value and its standard uncertainty (one standard
 // deviation, in the value's unit).
 type Estimate struct {
