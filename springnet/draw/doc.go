@@ -3,14 +3,14 @@
 // top) and an isometric, with a displaced shape (a load case's deflection
 // or a mode shape) drawn magnified over the unloaded outline, members
 // coloured by a value per member (utilisation, strain-energy share) on a
-// colour scale with a legend, and feet, supports and mounts marked and
-// named.
+// colour scale with a legend, rigid groups (a machine bed, a top plate)
+// shaded, and feet, supports and mounts marked and named.
 //
 // # Input
 //
 // A Scene holds plain geometry, not an analysis: node positions and their
-// displacements, members as pairs of node indices with a value each, and
-// mount points. FromModel fills the geometry of a springnet.Model; the
+// displacements, members as pairs of node indices with a value each,
+// rigid groups as lists of node indices, and mount points. FromModel fills the geometry of a springnet.Model; the
 // caller adds the displacements and values it wants shown (see the
 // trestle command for an example).
 //
