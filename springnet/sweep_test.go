@@ -1,6 +1,7 @@
 package springnet_test
 
 import (
+	"fmt"
 	"math"
 	"testing"
 
@@ -156,5 +157,41 @@ func TestSweepEulerMarginAndTipping(t *testing.T) {
 		}
 		require.Len(t, res.Mounts, 1, "the stand's mount")
 		assert.False(t, res.HasEulerMargin, "no members")
+	})
+}
+
+// BenchmarkSweep compares Sweep (one Solver, one factorisation per level
+// for every mount) with the same numbers from fresh package-level calls,
+// a Static and a MountStiffness per mount at each level, on the 10³
+// lattice with four mounts on its top layer.
+func BenchmarkSweep(b *testing.B) {
+	const n = 10
+	m := latticeModel(n, n, n)
+	top := func(i, j int) springnet.NodeID { return springnet.NodeID(i + (n+1)*(j+(n+1)*n)) }
+	for k, c := range [4][2]int{{0, 0}, {n, 0}, {n, n}, {0, n}} {
+		nd := top(c[0], c[1])
+		m.AddMount(fmt.Sprint("m", k), m.NodeAt(nd), nd)
+	}
+	b.Run("sweep", func(b *testing.B) {
+		for b.Loop() {
+			if _, err := springnet.Sweep(m, nil); err != nil {
+				b.Fatal(err)
+			}
+		}
+	})
+	b.Run("fresh calls", func(b *testing.B) {
+		for b.Loop() {
+			for _, lv := range materials.Levels {
+				st := &springnet.StaticSettings{Level: lv}
+				if _, err := springnet.Static(m, st); err != nil {
+					b.Fatal(err)
+				}
+				for k := range m.NumMounts() {
+					if _, err := springnet.MountStiffness(m, springnet.MountID(k), st); err != nil {
+						b.Fatal(err)
+					}
+				}
+			}
+		}
 	})
 }
