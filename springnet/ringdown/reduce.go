@@ -174,6 +174,7 @@ type reduction struct {
 	halfPts  [2]float64   // half-power frequencies [Hz], zero if not found
 	restrike int          // where a second strike begins, −1 if none
 	plan     *fourier.FFT // the last real FFT made, for reuse
+	phase    []float64    // unwrapped phase over the window, once computed
 }
 
 func (r *reduction) addWarn(format string, a ...any) {
@@ -213,7 +214,8 @@ func (r *reduction) run() (Result, error) {
 	r.y, r.h = analytic(r.fft(analyticLen(n, r.fs, r.cfg.band)), r.x, r.fs, r.cfg.band)
 	r.env = make([]float64, n)
 	for i := range r.env {
-		r.env[i] = math.Hypot(r.y[i], r.h[i])
+		// The record is scaled to at most 1: no overflow without Hypot.
+		r.env[i] = math.Sqrt(r.y[i]*r.y[i] + r.h[i]*r.h[i])
 	}
 	if err := r.chooseWindow(); err != nil {
 		return Result{}, err
@@ -497,8 +499,12 @@ func (r *reduction) stride() int {
 	return s
 }
 
-// unwrappedPhase returns the unwrapped phase of y + i h over the window.
+// unwrappedPhase returns the unwrapped phase of y + i h over the window
+// (computed once).
 func (r *reduction) unwrappedPhase() []float64 {
+	if r.phase != nil {
+		return r.phase
+	}
 	a, b := r.win[0], r.win[1]
 	ph := make([]float64, b-a+1)
 	prev := 0.0
@@ -513,6 +519,7 @@ func (r *reduction) unwrappedPhase() []float64 {
 		}
 		prev = v
 	}
+	r.phase = ph
 	return ph
 }
 
