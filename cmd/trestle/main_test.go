@@ -15,8 +15,12 @@ import (
 )
 
 // update rewrites the golden files: go test ./cmd/trestle -update. Check
-// the diff by eye before committing; the numbers of four-legs.toml are
-// checked against hand calculations in TestFourLegsHandCheck.
+// the diff by eye before committing. The numbers in the goldens of
+// four-legs.toml are checked against hand calculations in
+// TestFourLegsHandCheck (statics, stiffness, buckling), TestModesHandCheck
+// and TestResponseHandCheck; those of steel-legs.toml in
+// TestRangesHandCheck; the square tube's section properties are
+// (50² − 44²) mm² and (50⁴ − 44⁴)/12 mm⁴ (sharp corners).
 var update = flag.Bool("update", false, "rewrite testdata/*.golden from the current output")
 
 // result is what one run of the program gave.
