@@ -63,9 +63,10 @@ type MemberResult struct {
 	//
 	//	σ = N/A ± |My|/Sy ± |Mz|/Sz
 	//
-	// (σ = N/A ± √(My² + Mz²)/S for round sections; the general unsymmetric
-	// bending formula at the corners of the outline for sections with a
-	// product of area, such as angles). For a composite section these are
+	// (σ = N/A ± √(My² + Mz²)/S for round sections; for sections with a
+	// product of area, such as angles, σ = N/A + My·z/Iy − Mz·y/Iz on the
+	// principal axes at every corner of the outline, as the bounding-box
+	// fibres would overstate it). For a composite section these are
 	// the stresses of the part that governs the utilisation, Eᵢ times the
 	// strain at the outer extreme fibre (conservative for inner parts).
 	Tension, Compression float64
