@@ -67,33 +67,23 @@ func analyticLen(n int, rate float64, band Band) int {
 // band-pass and −i·sign(f) applied in the frequency domain (Oppenheim &
 // Schafer, Discrete-Time Signal Processing, 3rd ed., §12.4), and one or two
 // inverse real FFTs, all of length fft.Len() (from analyticLen). The DC
-// term is removed in both.
-func analytic(fft *fourier.FFT, x []float64, rate float64, band Band) (y, h []float64) {
+// term is removed from h; without a band, y is x itself (the caller has
+// removed its mean and trend).
+func analytic(fft *fourier.FFT, ws *workspace, x []float64, rate float64, band Band) (y, h []float64) {
 	n := len(x)
 	nf := fft.Len()
-	buf := make([]float64, nf)
+	buf, c := ws.buffers(nf)
 	copy(buf, x)
-	c := fft.Coefficients(nil, buf)
+	fft.Coefficients(c, buf)
 	c[0] = 0
-	if !band.IsZero() {
+	scale := 1 / float64(nf)
+	if band.IsZero() {
+		y = x
+	} else {
 		df := rate / float64(nf)
 		for k := range c {
 			c[k] *= complex(band.gain(float64(k)*df), 0)
 		}
-	}
-	scale := 1 / float64(nf)
-	if band.IsZero() {
-		y = make([]float64, n)
-		copy(y, x)
-		mean := 0.0
-		for _, v := range x {
-			mean += v
-		}
-		mean /= float64(n)
-		for i := range y {
-			y[i] -= mean
-		}
-	} else {
 		out := fft.Sequence(buf, c)
 		y = make([]float64, n)
 		for i := range y {
@@ -115,4 +105,28 @@ func analytic(fft *fourier.FFT, x []float64, rate float64, band Band) (y, h []fl
 		h[i] = out[i] * scale
 	}
 	return y, h
+}
+
+// workspace holds the FFT buffers one Reduce reuses; a nil *workspace
+// allocates fresh ones.
+type workspace struct {
+	buf  []float64
+	coef []complex128
+}
+
+// buffers returns a zeroed real buffer of length n and a coefficient
+// buffer of length n/2+1.
+func (w *workspace) buffers(n int) ([]float64, []complex128) {
+	if w == nil {
+		return make([]float64, n), make([]complex128, n/2+1)
+	}
+	if cap(w.buf) < n {
+		w.buf = make([]float64, n)
+	}
+	if cap(w.coef) < n/2+1 {
+		w.coef = make([]complex128, n/2+1)
+	}
+	buf := w.buf[:n]
+	clear(buf)
+	return buf, w.coef[:n/2+1]
 }

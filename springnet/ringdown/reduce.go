@@ -175,6 +175,7 @@ type reduction struct {
 	restrike int          // where a second strike begins, −1 if none
 	plan     *fourier.FFT // the last real FFT made, for reuse
 	phase    []float64    // unwrapped phase over the window, once computed
+	ws       workspace    // FFT buffers
 }
 
 func (r *reduction) addWarn(format string, a ...any) {
@@ -193,11 +194,12 @@ func (r *reduction) run() (Result, error) {
 	if r.scale == 0 {
 		return Result{}, fmt.Errorf("ringdown: the record is constant (after removing the mean and trend)")
 	}
-	scaled := make([]float64, n)
+	r.x = make([]float64, n)
 	for i, v := range r.rec.Samples {
-		scaled[i] = v / r.scale
+		r.x[i] = v / r.scale
 	}
-	r.x = detrend(scaled)
+	r.clipped, r.clipEnd = detectClipping(r.x)
+	detrend(r.x)
 	r.strike = 0
 	for i, v := range r.x {
 		if math.Abs(v) > math.Abs(r.x[r.strike]) {
@@ -207,11 +209,10 @@ func (r *reduction) run() (Result, error) {
 	if r.x[r.strike] == 0 {
 		return Result{}, fmt.Errorf("ringdown: the record is constant (after removing the mean and trend)")
 	}
-	r.clipped, r.clipEnd = detectClipping(scaled)
 	if err := r.findMode(); err != nil {
 		return Result{}, err
 	}
-	r.y, r.h = analytic(r.fft(analyticLen(n, r.fs, r.cfg.band)), r.x, r.fs, r.cfg.band)
+	r.y, r.h = analytic(r.fft(analyticLen(n, r.fs, r.cfg.band)), &r.ws, r.x, r.fs, r.cfg.band)
 	r.env = make([]float64, n)
 	for i := range r.env {
 		// The record is scaled to at most 1: no overflow without Hypot.
@@ -239,24 +240,29 @@ func (r *reduction) fft(n int) *fourier.FFT {
 	return r.plan
 }
 
-// detrend returns x less its least-squares straight line (gravity, DC and
-// slow drift).
-func detrend(x []float64) []float64 {
+// detrend subtracts from x, in place, its least-squares straight line
+// against the sample index (gravity, DC and slow drift). For the index
+// i = 0..n−1 the mean is (n−1)/2 and Σ(i − ī)² = n(n²−1)/12.
+func detrend(x []float64) {
 	n := len(x)
-	t := make([]float64, n)
-	for i := range t {
-		t[i] = float64(i)
+	if n < 2 {
+		return
 	}
-	out := make([]float64, n)
-	f, ok := fitLine(t, x, nil)
-	if !ok {
-		copy(out, x)
-		return out
+	mt := float64(n-1) / 2
+	stt := float64(n) * (float64(n)*float64(n) - 1) / 12
+	my := 0.0
+	for _, v := range x {
+		my += v
 	}
-	for i := range out {
-		out[i] = x[i] - f.a - f.b*t[i]
+	my /= float64(n)
+	sty := 0.0
+	for i, v := range x {
+		sty += (float64(i) - mt) * (v - my)
 	}
-	return out
+	b := sty / stt
+	for i := range x {
+		x[i] -= my + b*(float64(i)-mt)
+	}
 }
 
 // detectClipping counts samples sitting on the record's extreme values when
@@ -309,7 +315,7 @@ func (r *reduction) findMode() error {
 		seg[i] *= 0.5 * (1 + math.Cos(math.Pi*u))
 	}
 	// The same length as the analytic signal's FFT, so one plan serves both.
-	r.over = amplitudeSpectrum(r.fft(max(analyticLen(len(r.x), r.fs, r.cfg.band), 1<<16)), seg, r.fs)
+	r.over = amplitudeSpectrum(r.fft(max(analyticLen(len(r.x), r.fs, r.cfg.band), 1<<16)), &r.ws, seg, r.fs)
 	lo, hi := r.searchBand(m)
 	klo := int(math.Ceil(lo / r.over.df))
 	khi := int(math.Floor(hi / r.over.df))

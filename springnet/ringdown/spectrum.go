@@ -35,11 +35,11 @@ type spectrum struct {
 
 // amplitudeSpectrum returns |DFT| of x zero-padded to fft.Len() points
 // (at least len(x)).
-func amplitudeSpectrum(fft *fourier.FFT, x []float64, rate float64) spectrum {
+func amplitudeSpectrum(fft *fourier.FFT, ws *workspace, x []float64, rate float64) spectrum {
 	n := fft.Len()
-	buf := make([]float64, n)
+	buf, c := ws.buffers(n)
 	copy(buf, x)
-	c := fft.Coefficients(nil, buf)
+	fft.Coefficients(c, buf)
 	mag := make([]float64, len(c))
 	for i, v := range c {
 		mag[i] = cmplx.Abs(v)
