@@ -161,3 +161,35 @@ func TestBucklingUnsupported(t *testing.T) {
 	require.ErrorAs(t, err, &se)
 	assert.GreaterOrEqual(t, se.Col, 0)
 }
+
+// TestBucklingOneLoadedSpring: a supported chain in which one spring
+// carries compression N < 0 has a rank-one Kg = N·g·gᵀ, g = e_i − e_j,
+// hence exactly one load factor: K + λ·N·g·gᵀ is singular when
+// 1 + λ·N·gᵀK⁻¹g = 0, λ = −1 / (N·gᵀK⁻¹g) (hand derivation, matrix
+// determinant lemma).
+func TestBucklingOneLoadedSpring(t *testing.T) {
+	K, _ := chain(25, 1e3, 1, true)
+	bg := sparse.NewBuilder(25)
+	const N = -40.0 // compression [N per unit length]
+	bg.Add(10, 10, N)
+	bg.Add(11, 11, N)
+	bg.Add(11, 10, -N)
+	bg.Add(24, 24, 0) // keep the order
+	Kg := bg.Matrix()
+	ref, err := eigen.DenseBuckling(eigen.DenseOf(K), eigen.DenseOf(Kg), 1)
+	require.NoError(t, err)
+	res, err := eigen.Buckling(K, Kg, 1, nil)
+	require.NoError(t, err)
+	assert.InEpsilon(t, ref.Values[0], res.Values[0], freqTol)
+	// Fixed-free chain: a self-equilibrated pair of unit forces on nodes
+	// 10 and 11 stretches only the spring between them, so gᵀK⁻¹g = 1/k
+	// and λ = k/|N| = 25.
+	assert.InEpsilon(t, 1e3/40, res.Values[0], freqTol)
+
+	more, err := eigen.Buckling(K, Kg, 3, nil)
+	var few *eigen.FewerModesError
+	require.ErrorAs(t, err, &few)
+	assert.Equal(t, 1, few.Found)
+	require.NotNil(t, more)
+	assert.Equal(t, 1, more.Len())
+}
