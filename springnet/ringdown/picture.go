@@ -63,7 +63,10 @@ type picture struct {
 
 // picture collects the drawing data from the reduction.
 func (r *reduction) picture(sf sineFit, nom *MethodEstimate) picture {
+	// Draw the record up to half a window length past the fit window (a
+	// long noise floor adds nothing to see), and at least its first 20 %.
 	n := len(r.y)
+	n = min(n, max(r.win[1]+(r.win[1]-r.strike)/2, n/5, min(n, 2*MinSamples)))
 	back := r.scale // to the record's unit
 	pic := picture{unit: r.rec.Unit, f0: r.f0, halfPts: r.halfPts, band: r.cfg.band}
 	bins := min(traceBins, n)
@@ -95,7 +98,7 @@ func (r *reduction) picture(sf sineFit, nom *MethodEstimate) picture {
 		amp = back * r.env[r.win[0]]
 		sig = 2 * math.Pi * nom.DampedFrequency.Value * nom.Ratio.Value / math.Sqrt(1-nom.Ratio.Value*nom.Ratio.Value)
 	}
-	tEnd := r.rec.Time(n - 1)
+	tEnd := r.rec.Time(n - 1) // end of the drawn part
 	tStrike := r.rec.Time(r.strike)
 	for i := range curvePts + 1 {
 		t := r.rec.Start + float64(i)/curvePts*(tEnd-r.rec.Start)
