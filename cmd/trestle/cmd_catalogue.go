@@ -59,6 +59,8 @@ source of every figure.`,
 		return writeJSON(e.stdout, rep)
 	}
 	writeMaterials(e.stdout, rep, u)
+	fmt.Fprintf(e.stdout, "\nStrengths are material figures, not design resistances: no resistance or safety factors.\n")
+	writeCautions(e.stdout)
 	return nil
 }
 

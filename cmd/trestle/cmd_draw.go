@@ -85,6 +85,7 @@ magnification.`,
 	mode := fl.Int("mode", 0, "draw natural mode `N` (from 1) instead of a load case, coloured by strain-energy share")
 	scale := fl.Float64("scale", 0, "displacement magnification; 0 chooses one")
 	level := fl.String("level", "nominal", "material values: `low`, nominal or high")
+	labels := fl.Bool("labels", false, "write every node's name (default: feet, supports and mounts only)")
 	pos, err := fl.parse(e.args)
 	if err != nil {
 		return handled(err)
@@ -127,6 +128,7 @@ magnification.`,
 		}
 		s := modeScene(m, name, res, *mode-1, mr.Modes[*mode-1])
 		s.Scale = *scale
+		labelAll(&s, *labels)
 		if err := writeAtomic(*out, pos, func(w io.Writer) error { return writeScene(w, &s, fmtName) }); err != nil {
 			return err
 		}
@@ -142,6 +144,7 @@ magnification.`,
 		return err
 	}
 	s := sceneOf(a, c, *scale)
+	labelAll(&s, *labels)
 	if err := writeAtomic(*out, pos, func(w io.Writer) error { return writeScene(w, &s, fmtName) }); err != nil {
 		return err
 	}
@@ -172,4 +175,14 @@ func findCase(m *springnet.Model, name string) (springnet.CaseID, error) {
 		names = append(names, fmt.Sprintf("%q", m.CaseName(springnet.CaseID(i))))
 	}
 	return 0, fmt.Errorf("no load case %q; the model has %s", name, strings.Join(names, ", "))
+}
+
+// labelAll marks every node of s for a label when all is true.
+func labelAll(s *draw.Scene, all bool) {
+	if !all {
+		return
+	}
+	for i := range s.Nodes {
+		s.Nodes[i].Label = true
+	}
 }

@@ -33,8 +33,11 @@ var (
 	mountColour   = color.RGBA{20, 90, 200, 255}   // mounts
 	white         = color.RGBA{255, 255, 255, 255}
 	groupColour   = color.RGBA{90, 90, 110, 255}   // rigid group outline
-	groupFill     = color.RGBA{215, 218, 228, 255} // rigid group shading
+	groupFill     = color.RGBA{200, 204, 220, 255} // rigid group shading, drawn at groupOpacity
 )
+
+// groupOpacity lets members behind a rigid group show through it.
+const groupOpacity = 0.7
 
 // Colour returns the colour of value v on a scale whose red end is max
 // (max <= 0 means 1): v <= 0 is blue, v = max red, above max purple.

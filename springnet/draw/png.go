@@ -1,7 +1,9 @@
 package draw
 
 import (
+	"image/color"
 	"io"
+	"math"
 
 	"codeberg.org/go-fonts/liberation/liberationsansbold"
 	"codeberg.org/go-fonts/liberation/liberationsansregular"
@@ -65,7 +67,7 @@ func (s *Scene) PNG(w io.Writer) error {
 		case opPoly:
 			pa := path(p.pts, true)
 			if p.fill.A > 0 {
-				c.SetColor(p.fill)
+				c.SetColor(fillColour(p))
 				c.Fill(pa)
 			}
 			stroke(p, pa)
@@ -95,6 +97,14 @@ func (s *Scene) PNG(w io.Writer) error {
 	}
 	_, err = vgimg.PngCanvas{Canvas: c}.WriteTo(w)
 	return err
+}
+
+// fillColour is p's fill with its opacity.
+func fillColour(p prim) color.Color {
+	if p.opacity > 0 && p.opacity < 1 {
+		return color.NRGBA{R: p.fill.R, G: p.fill.G, B: p.fill.B, A: uint8(math.Round(255 * p.opacity))}
+	}
+	return p.fill
 }
 
 // faces holds the fonts of one rendering (no package-level state).

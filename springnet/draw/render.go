@@ -56,12 +56,14 @@ type prim struct {
 	r      float64
 	stroke color.RGBA // A == 0: none
 	fill   color.RGBA // A == 0: none
-	width  float64
-	dash   []float64
-	text   string
-	size   float64
-	anchor anchor
-	bold   bool
+	// opacity of the fill in (0, 1]; 0 means opaque.
+	opacity float64
+	width   float64
+	dash    []float64
+	text    string
+	size    float64
+	anchor  anchor
+	bold    bool
 }
 
 // view is one of the four projections.
@@ -256,19 +258,6 @@ func (r *renderer) view(v view, f frame) {
 	if v == front || v == side || v == iso {
 		r.floor(v, f)
 	}
-	// Rigid groups: a shaded outline through their nodes, drawn under the
-	// members.
-	for i, g := range s.Groups {
-		if len(g.Nodes) < 2 {
-			continue
-		}
-		pts := make([]pt, len(g.Nodes))
-		for j, n := range g.Nodes {
-			pts[j] = r.place(v, f, r.shown(n))
-		}
-		r.add(prim{op: opPoly, class: "group", id: fmt.Sprintf("%s-rg%d", name, i), title: "rigid " + g.Name,
-			pts: pts, fill: groupFill, stroke: groupColour, width: 1.5})
-	}
 	// The unloaded outline.
 	if r.k > 0 {
 		for i, m := range s.Members {
@@ -277,22 +266,39 @@ func (r *renderer) view(v view, f frame) {
 				stroke: ghostColour, width: 1, dash: []float64{4, 3}})
 		}
 	}
-	// Members far to near.
-	order := make([]int, len(s.Members))
-	for i := range order {
-		order[i] = i
+	// Members and rigid groups far to near (painter's order by mean
+	// depth), so a top plate hides the back legs; the plate is
+	// translucent, so what it hides still shows faintly.
+	type drawable struct {
+		depth float64
+		p     prim
 	}
-	mid := func(m Member) float64 { return v.depth(r.shown(m.A)) + v.depth(r.shown(m.B)) }
-	sort.SliceStable(order, func(i, j int) bool { return mid(s.Members[order[i]]) < mid(s.Members[order[j]]) })
-	for _, i := range order {
-		m := s.Members[i]
+	var items []drawable
+	for i, g := range s.Groups {
+		if len(g.Nodes) < 2 {
+			continue
+		}
+		pts := make([]pt, len(g.Nodes))
+		d := 0.0
+		for j, n := range g.Nodes {
+			pts[j] = r.place(v, f, r.shown(n))
+			d += v.depth(r.shown(n))
+		}
+		items = append(items, drawable{d / float64(len(g.Nodes)), prim{op: opPoly, class: "group", id: fmt.Sprintf("%s-rg%d", name, i),
+			title: "rigid " + g.Name, pts: pts, fill: groupFill, opacity: groupOpacity, stroke: groupColour, width: 1.5}})
+	}
+	for i, m := range s.Members {
 		pa, pb := r.place(v, f, r.shown(m.A)), r.place(v, f, r.shown(m.B))
 		p := prim{op: opLine, class: "member", id: fmt.Sprintf("%s-m%d", name, i), data: m.Name,
 			title: r.memberTitle(m), pts: []pt{pa, pb}, stroke: r.memberColour(m), width: memberWidth(m.Style)}
 		if m.Style == Spring {
 			p.dash = []float64{5, 3}
 		}
-		r.add(p)
+		items = append(items, drawable{(v.depth(r.shown(m.A)) + v.depth(r.shown(m.B))) / 2, p})
+	}
+	sort.SliceStable(items, func(i, j int) bool { return items[i].depth < items[j].depth })
+	for _, it := range items {
+		r.add(it.p)
 	}
 	// Nodes, feet, supports.
 	for i, n := range s.Nodes {

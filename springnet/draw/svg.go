@@ -49,6 +49,9 @@ func writeSVGPrim(b *bufio.Writer, p prim) {
 		var sb strings.Builder
 		if p.fill.A > 0 {
 			fmt.Fprintf(&sb, ` fill="%s"`, hex(p.fill))
+			if p.opacity > 0 && p.opacity < 1 {
+				fmt.Fprintf(&sb, ` fill-opacity="%s"`, f1(p.opacity))
+			}
 		} else {
 			sb.WriteString(` fill="none"`)
 		}
