@@ -193,3 +193,22 @@ func TestBucklingOneLoadedSpring(t *testing.T) {
 	require.NotNil(t, more)
 	assert.Equal(t, 1, more.Len())
 }
+
+// TestBucklingAllFactors asks for every load factor of small columns.
+func TestBucklingAllFactors(t *testing.T) {
+	for _, n := range []int{1, 3, 10} {
+		t.Run(fmt.Sprintf("n%d", n), func(t *testing.T) {
+			const a, c = 0.1, 5e3
+			K, Kg := henckyColumn(n, a, c)
+			res, err := eigen.Buckling(K, Kg, n, nil)
+			require.NoError(t, err)
+			require.Equal(t, n, res.Len())
+			for k := 1; k <= n; k++ {
+				// Hencky bar-chain closed form (see TestBucklingHencky).
+				s := math.Sin(float64(k) * math.Pi / float64(2*(n+1)))
+				assert.InEpsilon(t, 4*c/a*s*s, res.Values[k-1], freqTol, "mode %d", k)
+			}
+			assert.True(t, res.Checked)
+		})
+	}
+}
