@@ -1,9 +1,6 @@
 package sparse
 
-import (
-	"container/heap"
-	"math/rand/v2"
-)
+import "math/rand/v2"
 
 // Multilevel graph bisection (Hendrickson and Leland 1995; Karypis and
 // Kumar, SIAM J. Sci. Comput. 20(1), 1998): coarsen by heavy-edge
@@ -194,17 +191,44 @@ func (g *wgraph) cut(part []int8) int {
 // fmItem is a candidate move in the refinement heap.
 type fmItem struct{ gain, v, stamp int }
 
+// fmHeap is a max-heap of moves by gain (typed, so pushes do not box).
 type fmHeap []fmItem
 
-func (h fmHeap) Len() int           { return len(h) }
-func (h fmHeap) Less(i, j int) bool { return h[i].gain > h[j].gain }
-func (h fmHeap) Swap(i, j int)      { h[i], h[j] = h[j], h[i] }
-func (h *fmHeap) Push(x any)        { *h = append(*h, x.(fmItem)) }
-func (h *fmHeap) Pop() any {
-	old := *h
-	x := old[len(old)-1]
-	*h = old[:len(old)-1]
-	return x
+func (h *fmHeap) push(x fmItem) {
+	*h = append(*h, x)
+	q := *h
+	for i := len(q) - 1; i > 0; {
+		p := (i - 1) / 2
+		if q[p].gain >= q[i].gain {
+			break
+		}
+		q[p], q[i] = q[i], q[p]
+		i = p
+	}
+}
+
+func (h *fmHeap) pop() fmItem {
+	q := *h
+	top := q[0]
+	last := len(q) - 1
+	q[0] = q[last]
+	q = q[:last]
+	for i := 0; ; {
+		l, r, big := 2*i+1, 2*i+2, i
+		if l < len(q) && q[l].gain > q[big].gain {
+			big = l
+		}
+		if r < len(q) && q[r].gain > q[big].gain {
+			big = r
+		}
+		if big == i {
+			break
+		}
+		q[i], q[big] = q[big], q[i]
+		i = big
+	}
+	*h = q
+	return top
 }
 
 // refine improves the edge cut of part by Fiduccia–Mattheyses passes:
@@ -221,8 +245,9 @@ func (g *wgraph) refine(part []int8) {
 	stamp := make([]int, n)
 	locked := make([]bool, n)
 	var moves []int
+	var h fmHeap
 	for pass := 0; pass < fmPasses; pass++ {
-		h := fmHeap{}
+		h = h[:0]
 		for v := 0; v < n; v++ {
 			gv, boundary := 0, false
 			for p := g.ptr[v]; p < g.ptr[v+1]; p++ {
@@ -237,16 +262,15 @@ func (g *wgraph) refine(part []int8) {
 			locked[v] = false
 			stamp[v]++
 			if boundary {
-				h = append(h, fmItem{gv, v, stamp[v]})
+				h.push(fmItem{gv, v, stamp[v]})
 			}
 		}
-		heap.Init(&h)
 		moves = moves[:0]
 		cur, bestDelta, bestAt := 0, 0, 0
 		// Moves that restore balance are accepted even at a loss.
 		over := max(wt[0], wt[1]) > limit
-		for h.Len() > 0 && len(moves)-bestAt < fmStall {
-			it := heap.Pop(&h).(fmItem)
+		for len(h) > 0 && len(moves)-bestAt < fmStall {
+			it := h.pop()
 			v := it.v
 			if locked[v] || it.stamp != stamp[v] {
 				continue
@@ -278,7 +302,7 @@ func (g *wgraph) refine(part []int8) {
 					gain[u] += 2 * g.ew[p]
 				}
 				stamp[u]++
-				heap.Push(&h, fmItem{gain[u], u, stamp[u]})
+				h.push(fmItem{gain[u], u, stamp[u]})
 			}
 		}
 		// Roll back the moves after the best point.
