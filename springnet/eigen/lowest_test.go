@@ -607,3 +607,32 @@ func TestAllModes(t *testing.T) {
 		})
 	}
 }
+
+// TestMechanismMode: a DOF with mass but no stiffness (a loose mass) is a
+// mechanism, λ = 0 exactly; it is returned and flagged, and the other
+// modes are unchanged (the fixed-free chain closed form, Meirovitch).
+func TestMechanismMode(t *testing.T) {
+	const n, k, m = 20, 4e4, 0.5
+	bk, bm := sparse.NewBuilder(n+1), sparse.NewBuilder(n+1)
+	bk.Add(0, 0, k)
+	for i := 1; i < n; i++ {
+		bk.Add(i-1, i-1, k)
+		bk.Add(i, i, k)
+		bk.Add(i, i-1, -k)
+	}
+	bk.Add(n, n, 0) // the loose mass: no stiffness at all
+	for i := 0; i <= n; i++ {
+		bm.Add(i, i, m)
+	}
+	res, err := eigen.Lowest(bk.Matrix(), bm.Matrix(), 3, nil)
+	require.NoError(t, err)
+	assert.True(t, res.RigidBody(0))
+	v := res.Vector(0)
+	assert.InDelta(t, 1/math.Sqrt(m), math.Abs(v[n]), 1e-8, "the mechanism moves the loose mass only")
+	for j := 1; j <= 2; j++ {
+		w := 2 * math.Sqrt(k/m) * math.Sin(float64(2*j-1)*math.Pi/float64(2*(2*n+1)))
+		assert.InEpsilon(t, w*w, res.Values[j], freqTol, "mode %d", j)
+		assert.False(t, res.RigidBody(j))
+	}
+	assert.True(t, res.Checked)
+}
