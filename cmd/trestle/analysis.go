@@ -89,7 +89,11 @@ func analyse(m *springnet.Model, name string, l materials.Level, dyn dynamics) (
 		if errors.As(err, &cond) && ps != nil {
 			rep.Warnings = append(rep.Warnings, "suspect solve: "+err.Error())
 		} else if err != nil {
-			return nil, explain(name, err)
+			// A place held rigidly, or one the library cannot load (a
+			// mount offset from a pinned node), has no stiffness to
+			// report; the rest of the analysis stands.
+			rep.Warnings = append(rep.Warnings, fmt.Sprintf("no stiffness at %s: %v", placeName(m, p), err))
+			continue
 		}
 		mr := mountReport(ps)
 		mr.Name = placeName(m, p)

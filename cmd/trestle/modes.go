@@ -33,6 +33,11 @@ var (
 // whole (common practice reads shares under a few per cent as local).
 const internalShare = 0.02
 
+// swayShare: a mode whose largest translational mass share reaches this
+// is named by that translation ("sway along X") even when its rotation
+// about the floor carries more (a sway of a tall stand does both).
+const swayShare = 0.3
+
 // modeReference is the point about which rotational mass shares are taken:
 // the centre of the plan at floor level.
 func modeReference(m *springnet.Model) springnet.Vec {
@@ -73,18 +78,26 @@ func modes(m *springnet.Model, l materials.Level, dyn dynamics, warn []string) (
 		mr := ModeReport{Number: i + 1, FrequencyHz: res.Frequency(i), RigidBody: res.RigidBody(i),
 			LossFactor: [3]float64{lf.Low, lf.Nominal, lf.High}, DampingRatio: res.DampingRatio(i).Nominal,
 			Energy: []EnergyReport{}}
-		best := 0
+		best, bestT := 0, 0
 		for j, d := range participationDirs {
 			mr.Participation[j] = res.Participation(i, d)
 			if mr.Participation[j] > mr.Participation[best] {
 				best = j
 			}
+			if j < 3 && mr.Participation[j] > mr.Participation[bestT] {
+				bestT = j
+			}
+		}
+		// A sway also rotates the stand about the floor; name it by its
+		// translation when that carries a good share of the mass.
+		if mr.Participation[bestT] >= swayShare {
+			best = bestT
 		}
 		switch {
 		case mr.RigidBody:
 			mr.Motion = "free motion (rigid body or mechanism)"
 		case mr.Participation[best] < internalShare:
-			mr.Motion = "members against each other (local)"
+			mr.Motion = "local or higher-order (little mass moves)"
 		default:
 			mr.Motion = motionWords[best]
 		}
