@@ -389,3 +389,25 @@ func TestResponseHandCheck(t *testing.T) {
 	assert.Len(t, recs, 801, "a header and one row per frequency")
 	assert.Len(t, recs[0], 1+2*3, "frequency, then magnitude and phase per probe")
 }
+
+// TestRingdownMaterialIntoModel: the measured loss factor goes into a
+// model file through the printed material entry, and the modes of a stand
+// whose strain energy is all in that material then carry it (modal strain
+// energy with one material: η_mode = η_material).
+func TestRingdownMaterialIntoModel(t *testing.T) {
+	r := trestle(t, "", "ringdown", "--json", "--material", "steel S235", "testdata/tap.csv")
+	require.NoError(t, r.err)
+	var rep RingdownReport
+	decodeStrict(t, r.stdout, &rep)
+	require.Contains(t, rep.ModelMaterial, `from = "steel S235"`)
+	model, err := os.ReadFile("testdata/steel-legs.toml")
+	require.NoError(t, err)
+	text := strings.Replace(string(model), `material = "steel S235"`, `material = "steel S235 (measured)"`, 1) + "\n" + rep.ModelMaterial
+	m := trestle(t, text, "modes", "--json", "-")
+	require.NoError(t, m.err)
+	var modes ModesCommandReport
+	decodeStrict(t, m.stdout, &modes)
+	require.NotEmpty(t, modes.Modes.Modes)
+	// The entry is written to three significant figures.
+	assert.InEpsilon(t, rep.LossFactor.Value, modes.Modes.Modes[0].LossFactor[1], 5e-3)
+}

@@ -8,6 +8,7 @@ import (
 	"strconv"
 	"strings"
 
+	"github.com/trestle-go/trestle/materials"
 	"github.com/trestle-go/trestle/springnet/ringdown"
 )
 
@@ -56,8 +57,10 @@ undamped frequency, damping ratio ζ, log decrement δ, loss factor η,
 quality factor Q and specific damping capacity ψ, each with its standard
 uncertainty, and how well the four methods (peaks, analytic envelope,
 damped-sine fit, half-power bandwidth) agree. --picture draws the record
-with the fitted envelope and the spectrum.`,
-		"trestle ringdown tap.csv\ntrestle ringdown --column az --band 15-30 --picture tap.svg tap.csv\ntrestle ringdown --rate 2000 --json samples.txt", e)
+with the fitted envelope and the spectrum; --material prints a model-file
+material entry carrying the measured loss factor, to feed the test back
+into the model.`,
+		"trestle ringdown tap.csv\ntrestle ringdown --column az --band 15-30 --picture tap.svg tap.csv\ntrestle ringdown --material \"steel S235\" tap.csv\ntrestle ringdown --rate 2000 --json samples.txt", e)
 	var of outputFlags
 	of.add(fl)
 	column := fl.String("column", "", "signal column by header name or 1-based number; default: the liveliest")
@@ -68,6 +71,7 @@ with the fitted envelope and the spectrum.`,
 	centre := fl.Float64("centre", 0, "isolate the mode nearest this frequency [Hz]")
 	window := fl.String("window", "", "fit window `START-END` in seconds of record time; default automatic")
 	picture := fl.String("picture", "", "write a picture of the record and spectrum to this `file` (.svg or .png)")
+	material := fl.String("material", "", "print a model-file material with this catalogue `name` and the measured loss factor")
 	pos, err := fl.parse(e.args)
 	if err != nil {
 		return handled(err)
@@ -111,6 +115,12 @@ with the fitted envelope and the spectrum.`,
 			return err
 		}
 	}
+	var base materials.Material
+	if *material != "" {
+		if base, err = materials.Lookup(*material); err != nil {
+			return err
+		}
+	}
 	data, err := readInput(pos[0], e.stdin)
 	if err != nil {
 		return err
@@ -124,6 +134,9 @@ with the fitted envelope and the spectrum.`,
 		return err
 	}
 	rep := ringdownReport(pos[0], rec, res)
+	if *material != "" {
+		rep.ModelMaterial = materialSnippet(base, res.LossFactor())
+	}
 	if *picture != "" {
 		f := ringdown.SVG
 		if picFormat == "png" {
@@ -220,8 +233,19 @@ func writeRingdown(w io.Writer, r RingdownReport) {
 	if r.Picture != "" {
 		fmt.Fprintf(w, "\n  Picture written to %s\n", r.Picture)
 	}
+	if r.ModelMaterial != "" {
+		fmt.Fprintf(w, "\n  To use the measured loss factor (± %d standard uncertainties) in a model file:\n\n%s", ringdown.Coverage, indent(r.ModelMaterial, "    "))
+		fmt.Fprintln(w)
+	}
 	heading(w, "CAUTIONS")
 	for _, c := range append(append([]string(nil), ringdownCautions...), cautions...) {
 		fmt.Fprintf(w, "  • %s\n", c)
 	}
+}
+
+// materialSnippet is a model-file [materials] entry: the catalogue
+// material with the measured loss factor as low, nominal, high.
+func materialSnippet(m materials.Material, loss materials.Range) string {
+	return fmt.Sprintf("[materials.%q]\nfrom = %q\nloss-factor = [%s, %s, %s]   # measured by tap test\n",
+		m.Name+" (measured)", m.Name, sig3(loss.Low), sig3(loss.Nominal), sig3(loss.High))
 }

@@ -268,6 +268,7 @@ type RingdownReport struct {
 	Warnings         []string       `json:"warnings"`
 	Notes            []string       `json:"notes"` // what the reader decided
 	Picture          string         `json:"picture,omitempty"`
+	ModelMaterial    string         `json:"model_material,omitempty"` // with --material: a model-file material entry carrying the measured loss factor
 }
 
 // Estimate is a value with its standard uncertainty.
