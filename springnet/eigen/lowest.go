@@ -114,21 +114,53 @@ func (pb *problem) solve(n int, st *Settings) (*Result, error) {
 // positive definite for some σ₀ < sigma (true for K, M positive
 // semidefinite without a massless mechanism). It returns a *SingularError
 // when K − σM is singular (sigma is an eigenvalue, to working precision).
+// To count at several shifts, use a Counter, which keeps the symbolic
+// analysis.
 func CountBelow(K, M *sparse.Matrix, sigma float64) (int, error) {
-	if K == nil || M == nil || K.N() != M.N() {
-		return 0, errors.New("eigen: CountBelow: K and M must be non-nil and of the same order")
+	c, err := NewCounter(K, M, nil)
+	if err != nil {
+		return 0, err
 	}
+	return c.Below(sigma)
+}
+
+// Counter counts the eigenvalues of one pencil K·φ = λ·M·φ below given
+// shifts (see CountBelow), keeping the ordering and symbolic analysis of
+// K − σM between calls. Build it with NewCounter; it is not safe for
+// concurrent use.
+type Counter struct {
+	pc *pencil
+}
+
+// NewCounter checks K and M and returns a Counter for them. Of the
+// Settings only Ordering and Coords are used; nil means defaults.
+func NewCounter(K, M *sparse.Matrix, s *Settings) (*Counter, error) {
+	if K == nil || M == nil || K.N() != M.N() {
+		return nil, errors.New("eigen: CountBelow: K and M must be non-nil and of the same order")
+	}
+	if err := checkMatrix("K", K); err != nil {
+		return nil, err
+	}
+	if err := checkMatrix("M", M); err != nil {
+		return nil, err
+	}
+	var st Settings
+	if s != nil {
+		st.Ordering, st.Coords = s.Ordering, s.Coords
+	}
+	if st.Coords != nil && len(st.Coords) != K.N() {
+		return nil, fmt.Errorf("eigen: CountBelow: %d coordinates for %d DOF", len(st.Coords), K.N())
+	}
+	return &Counter{pc: newPencil(K, M, &st)}, nil
+}
+
+// Below returns the number of eigenvalues below sigma, or a
+// *SingularError when K − σM is singular.
+func (c *Counter) Below(sigma float64) (int, error) {
 	if math.IsNaN(sigma) || math.IsInf(sigma, 0) {
 		return 0, fmt.Errorf("eigen: CountBelow: shift %v", sigma)
 	}
-	if err := checkMatrix("K", K); err != nil {
-		return 0, err
-	}
-	if err := checkMatrix("M", M); err != nil {
-		return 0, err
-	}
-	pc := newPencil(K, M, &Settings{})
-	err := pc.factor(-sigma)
+	err := c.pc.factor(-sigma)
 	var pe *sparse.PivotError
 	switch {
 	case errors.As(err, &pe):
@@ -136,6 +168,6 @@ func CountBelow(K, M *sparse.Matrix, sigma float64) (int, error) {
 	case err != nil:
 		return 0, err
 	}
-	neg, _ := pc.f.Inertia()
+	neg, _ := c.pc.f.Inertia()
 	return neg, nil
 }

@@ -498,3 +498,25 @@ func TestAllModes(t *testing.T) {
 		})
 	}
 }
+
+// TestCounter: a Counter reused over shifts gives the dense counts.
+func TestCounter(t *testing.T) {
+	rng := rand.New(rand.NewPCG(1, 1))
+	c := randomNetwork(rng, 70, true, true, 0)
+	ref := denseAll(t, c.k, c.m)
+	cnt, err := eigen.NewCounter(c.k, c.m, nil)
+	require.NoError(t, err)
+	for _, i := range []int{0, 3, 17, 40, 69} {
+		// Midway between dense eigenvalues i−1 and i: exactly i below.
+		sigma := ref[i] - 1
+		if i > 0 {
+			sigma = 0.5 * (ref[i-1] + ref[i])
+		}
+		got, err := cnt.Below(sigma)
+		require.NoError(t, err)
+		assert.Equal(t, i, got, "σ = %g", sigma)
+		one, err := eigen.CountBelow(c.k, c.m, sigma)
+		require.NoError(t, err)
+		assert.Equal(t, got, one, "a fresh count agrees with the reused one")
+	}
+}
