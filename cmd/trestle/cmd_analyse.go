@@ -49,14 +49,16 @@ utilisation, checks and cautions. Works from any folder.`,
 
 func runAnalyse(e env) error {
 	fl := newFlags("analyse", "trestle analyse [flags] FILE",
-		`Analyses the stand in the model file FILE ("-": standard input): every load
-case and combination, the stiffness at each mount, the load share between
-feet, lift-off and tipping margin, member forces and utilisation.
-Governing numbers come first, details after.`,
+		`Analyses the stand in the model file FILE ("-": standard input; "demo":
+the built-in demo): every load case and combination, the stiffness at
+each mount, the load share between feet, lift-off and tipping margin,
+member forces and utilisation, Euler margins, whole-stand buckling and
+the natural modes with the running-speed check. Governing numbers come
+first, warnings next, details after.`,
 		"trestle analyse stand.toml\ntrestle analyse --level low --units us stand.toml\ncat stand.toml | trestle analyse --json -", e)
 	var of outputFlags
 	of.add(fl)
-	level := fl.String("level", "nominal", "material values: `low`, nominal or high")
+	level := fl.String("level", "nominal", "material `level`: low, nominal or high")
 	picture := fl.String("picture", "", "also draw the case with the largest displacement to this `file` (.svg or .png)")
 	pos, err := fl.parse(e.args)
 	if err != nil {

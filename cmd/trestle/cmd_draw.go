@@ -80,11 +80,11 @@ Feet, supports and mounts are marked and named; the legend states the
 magnification.`,
 		"trestle draw --out stand.svg stand.toml\ntrestle draw --case cutting --out demo.png demo\ntrestle draw --mode 1 --out sway.svg demo", e)
 	out := fl.String("out", "", "picture `file` to write (.svg or .png); required")
-	format := fl.String("format", "", "`svg` or png; default from the --out extension")
+	format := fl.String("format", "", "`format`: svg or png; default from the --out extension")
 	caseName := fl.String("case", "", "load case to show; default the first")
 	mode := fl.Int("mode", 0, "draw natural mode `N` (from 1) instead of a load case, coloured by strain-energy share")
 	scale := fl.Float64("scale", 0, "displacement magnification; 0 chooses one")
-	level := fl.String("level", "nominal", "material values: `low`, nominal or high")
+	level := fl.String("level", "nominal", "material `level`: low, nominal or high")
 	labels := fl.Bool("labels", false, "write every node's name (default: feet, supports and mounts only)")
 	pos, err := fl.parse(e.args)
 	if err != nil {

@@ -60,7 +60,7 @@ speeds given in the file. --picture draws one mode shape.`,
 	var of outputFlags
 	of.add(fl)
 	count := fl.Int("count", 0, "number of modes; default from the file, else 6")
-	level := fl.String("level", "nominal", "material values: `low`, nominal or high")
+	level := fl.String("level", "nominal", "material `level`: low, nominal or high")
 	picture := fl.String("picture", "", "draw a mode shape to this `file` (.svg or .png)")
 	which := fl.Int("mode", 0, "mode to draw (from 1); default the first that is not a free motion")
 	pos, err := fl.parse(e.args)
@@ -187,8 +187,8 @@ stiffness in the band; --csv writes the whole curves. The band comes from
 	var of outputFlags
 	of.add(fl)
 	band := fl.String("band", "", "frequency band `LOW-HIGH` in Hz")
-	level := fl.String("level", "nominal", "material values for the stiffness: `low`, nominal or high")
-	damping := fl.String("damping", "nominal", "loss factors at their `low`, nominal or high end (low gives the higher peaks)")
+	level := fl.String("level", "nominal", "material `level` for the stiffness: low, nominal or high")
+	damping := fl.String("damping", "nominal", "loss factors at their low, nominal or high end (`level`; low gives the higher peaks)")
 	points := fl.Int("points", 0, "frequencies in the band (log spaced); default 400")
 	csvOut := fl.String("csv", "", "write the curves to this CSV `file`")
 	pos, err := fl.parse(e.args)

@@ -39,7 +39,7 @@ SI units: N/m, N, N·m/rad, kg, kg·m². Compression-only feet count as in
 contact. For checking trestle against other solvers or for research.`,
 		"trestle export --dir out stand.toml\ntrestle export --dir demo-system --level low demo", e)
 	dir := fl.String("dir", "", "folder to write into (created if missing); required")
-	level := fl.String("level", "nominal", "material values: `low`, nominal or high")
+	level := fl.String("level", "nominal", "material `level`: low, nominal or high")
 	pos, err := fl.parse(e.args)
 	if err != nil {
 		return handled(err)

@@ -24,8 +24,8 @@ force N (lbf).`,
     --feet z=50,h=5 --loose --machine-mass 350 --out stand.toml
 trestle generate --kind piers --legs 2x2 --width 1.5m --depth 0.8m --height 0.6m \
     --material "masonry concrete grouted" --section "block 8in grouted" --out base.toml`, e)
-	units := fl.String("units", "si", "default units of plain numbers in flags and of the written file: `si` or us")
-	kind := fl.String("kind", "frame", "`frame` (legs, stretchers, bracing) or piers (under a rigid slab)")
+	units := fl.String("units", "si", "default `units` of plain numbers in flags and of the written file: si or us")
+	kind := fl.String("kind", "frame", "`kind`: frame (legs, stretchers, bracing) or piers (under a rigid slab)")
 	legs := fl.String("legs", "2x2", "legs along the width and the depth, `NxM`")
 	width := fl.String("width", "", "distance between the outer leg centre lines along X (required)")
 	depth := fl.String("depth", "", "the same along Y (required)")
@@ -35,9 +35,9 @@ trestle generate --kind piers --legs 2x2 --width 1.5m --depth 0.8m --height 0.6m
 	stretchers := fl.String("stretchers", "", "stretcher heights above the floor, comma-separated")
 	stretcherSection := fl.String("stretcher-section", "", "stretcher section spec; default the leg section")
 	brace := fl.String("brace", "", "faces to brace: front, back, left, right (comma-separated)")
-	pattern := fl.String("brace-pattern", "single", "`single` diagonal or cross (X) in each panel")
+	pattern := fl.String("brace-pattern", "single", "`pattern`: single diagonal or cross (X) in each panel")
 	braceSection := fl.String("brace-section", "", "brace section spec; default the leg section")
-	top := fl.String("top", "rigid", "`rigid` (a plate or machine bed) or beams (rails between leg heads)")
+	top := fl.String("top", "rigid", "`kind`: rigid (a plate or machine bed) or beams (rails between leg heads)")
 	topSection := fl.String("top-section", "", "rail section of a beam top; default the leg section")
 	feet := fl.String("feet", "", "foot stiffness, e.g. `z=50,h=5` (vertical, horizontal); none: legs fixed to the floor")
 	loose := fl.Bool("loose", false, "feet carry compression only (they lift off)")

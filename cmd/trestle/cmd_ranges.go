@@ -184,7 +184,7 @@ built-in demo; one of them may be "-" (standard input).`,
 		"trestle compare stand.toml stand-braced.toml\ntrestle compare --units us demo mine.toml", e)
 	var of outputFlags
 	of.add(fl)
-	level := fl.String("level", "nominal", "material values: `low`, nominal or high")
+	level := fl.String("level", "nominal", "material `level`: low, nominal or high")
 	pos, err := fl.parse(e.args)
 	if err != nil {
 		return handled(err)

@@ -66,7 +66,7 @@ into the model.`,
 	column := fl.String("column", "", "signal column by header name or 1-based number; default: the liveliest")
 	magnitude := fl.Bool("magnitude", false, "use √(x²+y²+z²) of three axis columns")
 	rate := fl.Float64("rate", 0, "sample rate [Hz] when the file has no time column")
-	timeUnit := fl.String("time-unit", "", "unit of the time column: `s`, ms, us or ns; default from the header")
+	timeUnit := fl.String("time-unit", "", "`unit` of the time column: s, ms, us or ns; default from the header")
 	band := fl.String("band", "", "isolate the mode inside `LOW-HIGH` Hz")
 	centre := fl.Float64("centre", 0, "isolate the mode nearest this frequency [Hz]")
 	window := fl.String("window", "", "fit window `START-END` in seconds of record time; default automatic")

@@ -228,7 +228,7 @@ type outputFlags struct {
 
 func (o *outputFlags) add(f *flags) {
 	f.BoolVar(&o.json, "json", false, "print the report as JSON (SI units; see cmd/trestle/SCHEMA.md)")
-	f.StringVar(&o.units, "units", "si", "units of the text report: `si` (N/µm, mm, MPa, kg) or us (lbf/in, in, psi, lb)")
+	f.StringVar(&o.units, "units", "si", "`units` of the text report: si (N/µm, mm, MPa, kg) or us (lbf/in, in, psi, lb)")
 }
 
 func indent(s, pre string) string {
