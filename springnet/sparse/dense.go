@@ -35,8 +35,11 @@ func (w *gemmWork) gemmNT(r, c, k int, a []float64, lda int, b []float64, ldb in
 	}
 }
 
+// solveBlock is the width of the sub-blocks of the panel's row solves.
+const solveBlock = 8
+
 // panelWidth is the number of pivots factorised together in partialLDLT.
-const panelWidth = 32
+const panelWidth = 96
 
 // partialLDLT eliminates the first k of the m rows/columns of a
 // symmetric front held as its first k columns f (m×k, row-major, lower
@@ -79,16 +82,24 @@ func partialLDLT(f, ub []float64, m, k int, d, w []float64, gw gemmPool, pc *Fac
 				wd[(j-p0)*pb+(c-p0)] = f[j*ld+c] * d[c]
 			}
 		}
-		// Rows below the panel's diagonal block: solve row·(L11 D)ᵀ = row.
-		for r := p1; r < m; r++ {
-			rr := f[r*ld+p0 : r*ld+p1]
-			for j := 0; j < pb; j++ {
-				s := rr[j]
-				wj := wd[j*pb : j*pb+j]
-				for c, v := range wj {
-					s -= rr[c] * v
+		// Rows below the panel's diagonal block: solve row·(L11 D)ᵀ = row,
+		// by substitution in sub-blocks of solveBlock columns, each
+		// followed by a multiply updating the panel's later columns.
+		for sb0 := 0; sb0 < pb; sb0 += solveBlock {
+			sb1 := min(sb0+solveBlock, pb)
+			for r := p1; r < m; r++ {
+				rr := f[r*ld+p0 : r*ld+p1]
+				for j := sb0; j < sb1; j++ {
+					s := rr[j]
+					wj := wd[j*pb+sb0 : j*pb+j]
+					for c, v := range wj {
+						s -= rr[sb0+c] * v
+					}
+					rr[j] = s / d[p0+j]
 				}
-				rr[j] = s / d[p0+j]
+			}
+			if sb1 < pb && m > p1 {
+				gw[0].gemmNT(m-p1, pb-sb1, sb1-sb0, f[p1*ld+p0+sb0:], ld, wd[sb1*pb+sb0:], pb, f[p1*ld+p0+sb1:], ld, false)
 			}
 		}
 		if p1 == k {

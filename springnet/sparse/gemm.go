@@ -3,31 +3,32 @@ package sparse
 // Packed matrix multiply for the dense kernels: C −= A·Bᵀ on row-major
 // blocks, in the blocking scheme of Goto and van de Geijn ("Anatomy of
 // high-performance matrix multiplication", ACM TOMS 34(3), 2008) with a
-// 4×8 register tile.
+// 6×8 register tile.
 
 const (
 	gemmKC = 256  // depth of a packed panel
-	gemmMC = 128  // rows of A packed at a time
+	gemmMC = 144  // rows of A packed at a time (a multiple of gemmMR)
+	gemmMR = 6    // rows of a register tile
 	gemmNC = 2048 // rows of B packed at a time
 )
 
 // gemmWork is the packing workspace of one goroutine.
 type gemmWork struct {
 	ap, bp []float64
-	tile   [32]float64
+	tile   [gemmMR * 8]float64
 }
 
 func newGemmWork() *gemmWork {
 	return &gemmWork{ap: make([]float64, gemmMC*gemmKC), bp: make([]float64, gemmNC*gemmKC)}
 }
 
-// kern4x8go is the portable 4×8 tile kernel.
-func kern4x8go(k int, a, b, c []float64, ldc int) {
-	var acc [4][8]float64
+// kern6x8go is the portable 6×8 tile kernel.
+func kern6x8go(k int, a, b, c []float64, ldc int) {
+	var acc [6][8]float64
 	for t := 0; t < k; t++ {
-		at := a[4*t : 4*t+4]
+		at := a[6*t : 6*t+6]
 		bt := b[8*t : 8*t+8]
-		for i := 0; i < 4; i++ {
+		for i := 0; i < 6; i++ {
 			ai := at[i]
 			r := &acc[i]
 			for j := 0; j < 8; j++ {
@@ -35,7 +36,7 @@ func kern4x8go(k int, a, b, c []float64, ldc int) {
 			}
 		}
 	}
-	for i := 0; i < 4; i++ {
+	for i := 0; i < 6; i++ {
 		ci := c[i*ldc : i*ldc+8]
 		for j := range ci {
 			ci[j] -= acc[i][j]
@@ -74,24 +75,24 @@ func (w *gemmWork) gemmPacked(r, c, k int, a []float64, lda int, b []float64, ld
 			}
 			i0 := 0
 			if lower {
-				i0 = jc / 4 * 4 // rows above jc have no lower-triangle tile here
+				i0 = jc / gemmMR * gemmMR // rows above jc have no lower-triangle tile here
 			}
 			for ic := i0; ic < r; ic += gemmMC {
 				mc := min(gemmMC, r-ic)
-				nstripA := (mc + 3) / 4
+				nstripA := (mc + gemmMR - 1) / gemmMR
 				for s := 0; s < nstripA; s++ {
-					dst := w.ap[s*4*kc : (s+1)*4*kc]
-					ia := ic + 4*s
-					ni := min(4, ic+mc-ia)
+					dst := w.ap[s*gemmMR*kc : (s+1)*gemmMR*kc]
+					ia := ic + gemmMR*s
+					ni := min(gemmMR, ic+mc-ia)
 					for ii := 0; ii < ni; ii++ {
 						src := a[(ia+ii)*lda+kc0 : (ia+ii)*lda+kc0+kc]
 						for t, v := range src {
-							dst[4*t+ii] = v
+							dst[gemmMR*t+ii] = v
 						}
 					}
-					for ii := ni; ii < 4; ii++ {
+					for ii := ni; ii < gemmMR; ii++ {
 						for t := 0; t < kc; t++ {
-							dst[4*t+ii] = 0
+							dst[gemmMR*t+ii] = 0
 						}
 					}
 				}
@@ -100,19 +101,19 @@ func (w *gemmWork) gemmPacked(r, c, k int, a []float64, lda int, b []float64, ld
 					nj := min(8, jc+nc-j0)
 					bs := w.bp[sb*8*kc : (sb+1)*8*kc]
 					for sa := 0; sa < nstripA; sa++ {
-						ia := ic + 4*sa
-						if lower && j0 > ia+3 {
+						ia := ic + gemmMR*sa
+						if lower && j0 > ia+gemmMR-1 {
 							continue
 						}
-						ni := min(4, ic+mc-ia)
-						as := w.ap[sa*4*kc : (sa+1)*4*kc]
-						if ni == 4 && nj == 8 {
-							kern4x8(kc, as, bs, cc[ia*ldc+j0:], ldc)
+						ni := min(gemmMR, ic+mc-ia)
+						as := w.ap[sa*gemmMR*kc : (sa+1)*gemmMR*kc]
+						if ni == gemmMR && nj == 8 {
+							kern6x8(kc, as, bs, cc[ia*ldc+j0:], ldc)
 							continue
 						}
 						t := w.tile[:]
 						clear(t)
-						kern4x8(kc, as, bs, t, 8)
+						kern6x8(kc, as, bs, t, 8)
 						for ii := 0; ii < ni; ii++ {
 							row := cc[(ia+ii)*ldc+j0 : (ia+ii)*ldc+j0+nj]
 							for jj := range row {

@@ -3,7 +3,7 @@
 package sparse
 
 //go:noescape
-func kern4x8avx(k int, a, b, c *float64, ldc int)
+func kern6x8avx(k int, a, b, c *float64, ldc int)
 
 func cpuid(eaxArg, ecxArg uint32) (eax, ebx, ecx, edx uint32)
 
@@ -30,14 +30,14 @@ func hasAVX2FMA() bool {
 // useAVX is fixed at start-up from the CPU's features (read-only after).
 var useAVX = hasAVX2FMA()
 
-// kern4x8 sets C[i][j] -= Σ_t a[4t+i]·b[8t+j] for the 4×8 tile at c.
-func kern4x8(k int, a, b, c []float64, ldc int) {
+// kern6x8 sets C[i][j] -= Σ_t a[6t+i]·b[8t+j] for the 6×8 tile at c.
+func kern6x8(k int, a, b, c []float64, ldc int) {
 	if useAVX && k > 0 {
-		_ = a[4*k-1]
+		_ = a[6*k-1]
 		_ = b[8*k-1]
-		_ = c[3*ldc+7]
-		kern4x8avx(k, &a[0], &b[0], &c[0], ldc)
+		_ = c[5*ldc+7]
+		kern6x8avx(k, &a[0], &b[0], &c[0], ldc)
 		return
 	}
-	kern4x8go(k, a, b, c, ldc)
+	kern6x8go(k, a, b, c, ldc)
 }
