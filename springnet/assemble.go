@@ -72,7 +72,7 @@ func (nt *net) elemStiffness(i int, k *[12][12]float64, dofs *[12]edof) int {
 			for c := 0; c < nd; c++ {
 				k[r][c] = 0
 			}
-			if p.active {
+			if p.active || p.held && dofs[r].c != 2 {
 				k[r][r] = p.k6[dofs[r].c]
 			}
 		}

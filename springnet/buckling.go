@@ -109,12 +109,7 @@ func (sv *Solver) Buckling(m *Model, c CaseID, s *BucklingSettings) (*BucklingRe
 	if len(co) > 0 {
 		// The tipping search moves the contact state on; restore the
 		// state of the solution.
-		for _, i := range co {
-			nt.el[i].active = true
-		}
-		for _, e := range cr.lifted {
-			nt.el[e].active = false
-		}
+		cr.setContact()
 	}
 	if !cr.finite() {
 		return nil, fmt.Errorf("springnet: buckling: case %q: the static solution is not finite", name)

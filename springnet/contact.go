@@ -4,6 +4,7 @@ import (
 	"errors"
 	"fmt"
 	"math"
+	"slices"
 )
 
 // contactTol is the relative size, against the total applied force, below
@@ -13,13 +14,24 @@ import (
 const contactTol = 1e-9
 
 // contact solves case c on compression-only feet by an active-set loop of
-// linear solves: start with every foot in contact; drop the foot in the
-// worst tension; re-admit every lifted foot that would penetrate the floor;
-// repeat until nothing changes. Then it follows the contact path beyond
-// the case's loads to find the tipping margin.
+// linear solves (see settle), then follows the contact path beyond the
+// case's loads to find the tipping margin.
+//
+// A loose foot in contact carries all its springs; lifted, none. That
+// model can have no consistent contact set: a foot pulls on the floor
+// while down, yet once it lets go sideways the frame racks and the foot
+// would press into the floor. The search then cycles; the feet that flip
+// within the cycle are held (FootResult.Held): lifted vertically but
+// still held sideways by their horizontal and rotational springs, the
+// limit of a foot at the point of lifting whose friction still holds.
+// With every cycling foot held the vertical contact is a linear
+// complementarity problem with a symmetric positive definite matrix, for
+// which the least-index rule terminates (Murty 1988, from memory), so the
+// holding ends.
 func (s *Solver) contact(nt *net, c CaseID, cl *caseLoads, co []int) (*CaseResult, error) {
 	for _, i := range co {
 		nt.el[i].active = true
+		nt.el[i].held = false
 	}
 	fg := nt.dm.eqVector(nil, cl.grav)
 	fv := nt.dm.eqVector(nil, cl.vari)
@@ -30,34 +42,19 @@ func (s *Solver) contact(nt *net, c CaseID, cl *caseLoads, co []int) (*CaseResul
 	tol := contactTol * (loadMagnitude(cl.grav) + loadMagnitude(cl.vari))
 	name := nt.m.cases[c].name
 	u := make([]float64, len(f))
-	maxIter := 4*len(co) + 20
 	var residual float64
-	for it := 0; ; it++ {
-		if it > maxIter {
-			return nil, fmt.Errorf("springnet: case %q: the contact of the compression-only feet did not settle in %d solves", name, maxIter)
+	for {
+		r, cycle, err := s.settle(nt, u, f, co, tol, name)
+		if err != nil {
+			return nil, err
 		}
-		if err := s.factor(nt); err != nil {
-			return nil, nt.tipOrMechanism(err, name, co)
-		}
-		residual = s.solve(u, f)
-		worst, worstR := -1, -tol
-		changed := false
-		for _, i := range co {
-			r := nt.footFZ(i, u)
-			switch {
-			case nt.el[i].active && r < worstR:
-				worst, worstR = i, r
-			case !nt.el[i].active && r > tol:
-				nt.el[i].active = true // it would press into the floor
-				changed = true
-			}
-		}
-		if worst >= 0 {
-			nt.el[worst].active = false
-			changed = true
-		}
-		if !changed {
+		if cycle == nil {
+			residual = r
 			break
+		}
+		if !nt.hold(cycle, co) {
+			return nil, fmt.Errorf("springnet: case %q: the contact of the compression-only feet did not settle "+
+				"with every foot held", name)
 		}
 	}
 	cr := nt.recover(c, cl, u, residual)
@@ -67,6 +64,106 @@ func (s *Solver) contact(nt *net, c CaseID, cl *caseLoads, co []int) (*CaseResul
 	}
 	cr.tip = tip
 	return cr, nil
+}
+
+// hold marks the feet of cycle as held; if all of them already are, every
+// foot of co. It reports whether anything changed.
+func (nt *net) hold(cycle, co []int) bool {
+	changed := false
+	for _, i := range cycle {
+		if !nt.el[i].held {
+			nt.el[i].held = true
+			changed = true
+		}
+	}
+	if changed {
+		return true
+	}
+	for _, i := range co {
+		if !nt.el[i].held {
+			nt.el[i].held = true
+			changed = true
+		}
+	}
+	return changed
+}
+
+// settle finds the contact set of the feet co under the loads f, starting
+// from their current state, and leaves the solution in u. Each step solves
+// with the current set and flips feet in contact that pull on the floor or
+// lifted feet that would press into it. The first steps drop the foot in
+// the worst tension and re-admit every penetrating foot at once (fast in
+// the common case); once a contact set repeats, one foot at a time, the
+// one of least index (Murty's least-index rule). If a set repeats under
+// that rule too, settle returns the feet that flipped since its first
+// visit and leaves the state as it is.
+func (s *Solver) settle(nt *net, u, f []float64, co []int, tol float64, name string) (float64, []int, error) {
+	maxSolves := 50*len(co) + 100
+	seen := make(map[string]int) // contact set → index into flips when visited
+	var flips []int
+	leastIndex := false
+	for solves := 0; ; solves++ {
+		if solves > maxSolves {
+			return 0, nil, fmt.Errorf("springnet: case %q: the contact of the compression-only feet did not settle in %d solves", name, maxSolves)
+		}
+		key := nt.contactKey(co)
+		if at, ok := seen[key]; ok {
+			if leastIndex {
+				return 0, uniqueInts(flips[at:]), nil
+			}
+			leastIndex = true
+			clear(seen)
+			flips = flips[:0]
+		}
+		seen[key] = len(flips)
+		if err := s.factor(nt); err != nil {
+			return 0, nil, nt.tipOrMechanism(err, name, co)
+		}
+		residual := s.solve(u, f)
+		worst, worstR := -1, -tol
+		var admit []int
+		for _, i := range co {
+			r := nt.footFZ(i, u)
+			switch {
+			case nt.el[i].active && r < worstR && !(leastIndex && worst >= 0):
+				worst, worstR = i, r
+			case !nt.el[i].active && r > tol:
+				admit = append(admit, i) // it would press into the floor
+			}
+		}
+		if leastIndex {
+			// The least index among both kinds of violation.
+			switch {
+			case worst >= 0 && (len(admit) == 0 || worst < admit[0]):
+				admit = nil
+			case len(admit) > 0:
+				worst, admit = -1, admit[:1]
+			}
+		}
+		if worst < 0 && len(admit) == 0 {
+			return residual, nil, nil
+		}
+		if worst >= 0 {
+			nt.el[worst].active = false
+			flips = append(flips, worst)
+		}
+		for _, i := range admit {
+			nt.el[i].active = true
+			flips = append(flips, i)
+		}
+	}
+}
+
+// uniqueInts returns the distinct values of x in order of first
+// appearance.
+func uniqueInts(x []int) []int {
+	var out []int
+	for _, v := range x {
+		if !slices.Contains(out, v) {
+			out = append(out, v)
+		}
+	}
+	return out
 }
 
 // footFZ returns the vertical reaction foot i would have from u if it were
@@ -131,7 +228,9 @@ func (s *Solver) tipping(nt *net, fg, fv []float64, co []int, tol float64) (Tipp
 	ug, uv := make([]float64, n), make([]float64, n)
 	lam := 1.0
 	last := ""
-	maxEvents := 8*len(co) + 20
+	seen := make(map[string]int) // contact sets visited at this λ → index into flips
+	var flips []int
+	maxEvents := 50*len(co) + 100
 	for ev := 0; ev < maxEvents; ev++ {
 		if err := s.factor(nt); err != nil {
 			var me *MechanismError
@@ -146,26 +245,31 @@ func (s *Solver) tipping(nt *net, fg, fv []float64, co []int, tol float64) (Tipp
 		}
 		s.solve(ug, fg)
 		s.solve(uv, fv)
-		// First make the contact set consistent at λ (feet that unload
-		// together, at the same λ, leave one after the other).
-		worst, worstR := -1, -tol
-		readmit := false
+		// First make the contact set consistent at λ, one foot at a time,
+		// the least index first (feet that unload together, at the same λ,
+		// leave one after the other). A set seen before at this λ is a
+		// cycle: its feet are held (see contact) and the search goes on.
+		flip := -1
 		for _, i := range co {
 			r := nt.footFZ(i, ug) + lam*nt.footFZ(i, uv)
-			switch {
-			case nt.el[i].active && r < worstR:
-				worst, worstR = i, r
-			case !nt.el[i].active && r > tol:
-				nt.el[i].active = true
-				readmit = true
+			if (nt.el[i].active && r < -tol) || (!nt.el[i].active && r > tol) {
+				flip = i
+				break
 			}
 		}
-		if worst >= 0 {
-			nt.el[worst].active = false
-			last = nt.m.elems[worst].foot.Name
-			continue
-		}
-		if readmit {
+		if flip >= 0 {
+			if cyc, ok := nt.visit(seen, &flips, flip, co); !ok {
+				if !nt.hold(cyc, co) {
+					return Tipping{Note: fmt.Sprintf("the contact of the feet did not settle at %.4g × the loads", lam)}, nil
+				}
+				clear(seen)
+				flips = flips[:0]
+				continue
+			}
+			nt.el[flip].active = !nt.el[flip].active
+			if !nt.el[flip].active {
+				last = nt.m.elems[flip].foot.Name
+			}
 			continue
 		}
 		next, who := math.Inf(1), -1
@@ -173,7 +277,8 @@ func (s *Solver) tipping(nt *net, fg, fv []float64, co []int, tol float64) (Tipp
 			rg, rv := nt.footFZ(i, ug), nt.footFZ(i, uv)
 			// In contact and unloading, or lifted and coming down: the
 			// reaction rg + λ·rv crosses zero at λ = −rg/rv.
-			if (nt.el[i].active && rv < 0) || (!nt.el[i].active && rv > 0) {
+			// A rate within round-off of zero (|rv| ≤ tol) is no change.
+			if (nt.el[i].active && rv < -tol) || (!nt.el[i].active && rv > tol) {
 				// A foot already at zero (round-off either side) counts now.
 				if l := -rg / rv; l > lam*(1-eventTol) && l < next {
 					next, who = math.Max(l, lam), i
@@ -183,13 +288,50 @@ func (s *Solver) tipping(nt *net, fg, fv []float64, co []int, tol float64) (Tipp
 		if who < 0 {
 			return Tipping{}, nil
 		}
+		if next > lam*(1+eventTol) {
+			clear(seen)
+			flips = flips[:0]
+		} else if cyc, ok := nt.visit(seen, &flips, who, co); !ok {
+			// The event undoes the consistency step at the same λ.
+			if !nt.hold(cyc, co) {
+				return Tipping{Note: fmt.Sprintf("the contact of the feet did not settle at %.4g × the loads", lam)}, nil
+			}
+			clear(seen)
+			flips = flips[:0]
+			continue
+		}
 		nt.el[who].active = !nt.el[who].active
 		if !nt.el[who].active {
 			last = nt.m.elems[who].foot.Name
 		}
 		lam = next
 	}
-	return Tipping{}, nil
+	return Tipping{Note: fmt.Sprintf("the contact path did not end in %d changes of contact (last at %.4g × the loads)", maxEvents, lam)}, nil
+}
+
+// visit records the current contact set of the feet co in seen and the
+// coming flip of foot i in flips. If the set was seen before, it returns
+// the feet flipped since then and false.
+func (nt *net) visit(seen map[string]int, flips *[]int, i int, co []int) ([]int, bool) {
+	k := nt.contactKey(co)
+	if at, ok := seen[k]; ok {
+		return uniqueInts((*flips)[at:]), false
+	}
+	seen[k] = len(*flips)
+	*flips = append(*flips, i)
+	return nil, true
+}
+
+// contactKey returns the contact set of the feet co as a string of 0 and 1.
+func (nt *net) contactKey(co []int) string {
+	key := make([]byte, len(co))
+	for j, i := range co {
+		key[j] = '0'
+		if nt.el[i].active {
+			key[j] = '1'
+		}
+	}
+	return string(key)
 }
 
 // eventTol is the relative band around the current load factor within

@@ -344,21 +344,32 @@ func StrainEnergies(c *CaseResult, dst []float64) []float64 {
 	return c.nt.strainEnergies(dst, c.u)
 }
 
-// contactState sets the feet of c's net to c's contact state (lifted feet
-// inactive) and returns the function that restores the previous state.
-func (c *CaseResult) contactState() func() {
+// setContact sets the feet of c's net to c's contact state: lifted feet
+// inactive, held feet held.
+func (c *CaseResult) setContact() {
 	nt := c.nt
-	was := make([]bool, len(nt.el))
 	for i := range nt.el {
-		was[i] = nt.el[i].active
 		nt.el[i].active = true
+		nt.el[i].held = false
 	}
 	for _, e := range c.lifted {
 		nt.el[e].active = false
 	}
+	for _, e := range c.held {
+		nt.el[e].held = true
+	}
+}
+
+// contactState sets the feet of c's net to c's contact state (lifted feet
+// inactive) and returns the function that restores the previous state.
+func (c *CaseResult) contactState() func() {
+	nt := c.nt
+	was := make([]prepElem, len(nt.el))
+	copy(was, nt.el)
+	c.setContact()
 	return func() {
 		for i := range nt.el {
-			nt.el[i].active = was[i]
+			nt.el[i].active, nt.el[i].held = was[i].active, was[i].held
 		}
 	}
 }

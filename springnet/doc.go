@@ -63,8 +63,13 @@
 // equation's point to the ordering, and keeps the symbolic factorisation
 // while the pattern is unchanged (a sweep over materials.Level, or feet
 // entering and leaving contact, refactorises only). Compression-only feet
-// are solved by an active-set loop of linear solves; the tipping margin
-// follows the contact path exactly (see Tipping). System exports K, the
+// are solved by an active-set loop of linear solves: the worst violation
+// first, then, once a contact set repeats, one foot at a time by Murty's
+// least-index rule. A loose foot drops all its springs when it lifts, so
+// a foot can have no consistent state (down it pulls, lifted the frame
+// racks and it presses into the floor); it is then held: lifted, its
+// sideways springs kept (FootResult.Held). The tipping margin follows the
+// contact path exactly (see Tipping). System exports K, the
 // lumped mass and the loads (Matrix Market). Sweep runs the statics, the
 // mount stiffness at every mount and, if asked, buckling at the Low,
 // Nominal and High material levels with one Solver and returns each

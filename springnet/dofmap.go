@@ -141,6 +141,7 @@ type prepElem struct {
 	rotA   bool              // beam end a carries rotations
 	rotB   bool              // beam end b carries rotations
 	active bool              // false: a lifted compression-only foot
+	held   bool              // a compression-only foot that keeps its horizontal and rotational springs when lifted
 }
 
 // prepare resolves element properties at level l and builds the DOF map.

@@ -188,6 +188,14 @@ type FootResult struct {
 	Share    float64 // Reaction.FZ over the sum of FZ of all feet [-]; 0 if that sum is 0
 	Uplift   bool    // the vertical reaction is tension (the foot pulls the stand down)
 	Lifted   bool    // a compression-only foot out of contact
+	// Held marks a lifted foot that still carries its horizontal and
+	// rotational springs: the contact search found no consistent set with
+	// it either down or free (it pulls on the floor while down, and presses
+	// into it once it lets go sideways), so it is taken at the point of
+	// lifting with friction holding it. Its vertical reaction is zero; its
+	// Reaction holds the sideways force. A foot so close to lifting
+	// deserves a look: anchor it or check the frame's racking.
+	Held bool
 }
 
 // Equilibrium compares the applied loads with the reactions, forces and
@@ -236,6 +244,7 @@ type CaseResult struct {
 	eq       Equilibrium
 	tip      Tipping
 	lifted   []ElementID
+	held     []ElementID // compression-only feet held sideways (FootResult.Held)
 }
 
 // Name returns the case's name.
@@ -393,19 +402,22 @@ func (nt *net) recover(c CaseID, cl *caseLoads, u []float64, residual float64) *
 			ef.Spring = loadOf(sf)
 		case FootKind:
 			var r [6]float64
-			if p.active {
-				for j := 0; j < 6; j++ {
+			for j := 0; j < 6; j++ {
+				if p.active || p.held && j != 2 {
 					r[j] = -p.k6[j] * ua[j]
 				}
 			}
 			ef.Spring = loadOf(r)
 			fr := FootResult{Element: ElementID(i), Name: e.foot.Name, Node: e.a, Reaction: ef.Spring,
-				Uplift: r[2] < 0, Lifted: !p.active}
+				Uplift: r[2] < 0, Lifted: !p.active, Held: p.held && !p.active}
 			sumFZ += r[2]
 			cr.footIdx[i] = len(cr.feet)
 			cr.feet = append(cr.feet, fr)
 			if !p.active {
 				cr.lifted = append(cr.lifted, ElementID(i))
+			}
+			if p.held {
+				cr.held = append(cr.held, ElementID(i))
 			}
 		case BeamKind:
 			ef.Beam = element.BeamEndForces(p.frame, p.bp, ua, ub)
