@@ -73,11 +73,26 @@ type bucklingOp struct {
 	pc    *pencil // factorised at α = 0: K
 	k, kg *sparse.Matrix
 	t     []float64
+	ts    [][]float64
 }
 
 func (op *bucklingOp) apply(dst, x, _ []float64) error {
 	op.kg.MulVec(op.t, x)
 	if res := op.pc.solve(dst, op.t); !(res <= solveResidualTol) {
+		return fmt.Errorf("eigen: solve with K has backward error %.3g", res)
+	}
+	return nil
+}
+
+func (op *bucklingOp) applyMany(dst, x, _ [][]float64) error {
+	for len(op.ts) < len(x) {
+		op.ts = append(op.ts, make([]float64, len(op.t)))
+	}
+	ts := op.ts[:len(x)]
+	for i, xi := range x {
+		op.kg.MulVec(ts[i], xi)
+	}
+	if res := op.pc.solveMany(dst, ts); !(res <= solveResidualTol) {
 		return fmt.Errorf("eigen: solve with K has backward error %.3g", res)
 	}
 	return nil

@@ -16,6 +16,9 @@ import (
 type operator interface {
 	// apply sets dst = OP·x, given bx = B·x. It must not change x or bx.
 	apply(dst, x, bx []float64) error
+	// applyMany sets dst[i] = OP·x[i], given bx[i] = B·x[i], for a block
+	// (one pass over the factor for all of them).
+	applyMany(dst, x, bx [][]float64) error
 	// bmul sets dst = B·x.
 	bmul(dst, x []float64)
 }
@@ -155,15 +158,14 @@ func (kr *krylov) start() error {
 	return nil
 }
 
-// expandRow computes OP·q_c, B-orthogonalises it against rows [0, k),
-// stores the coefficients in column c of h, and appends the normalised
-// remainder as row k. It reports whether the remainder was a breakdown (so
-// the row holds a replacement vector or, if none exists, zeros).
-func (kr *krylov) expandRow(c int) error {
+// appendImage takes row k (the current size), which holds OP·q_c,
+// B-orthogonalises it against rows [0, k), stores the coefficients in
+// column c of h, and keeps the normalised remainder as row k. On a
+// breakdown the row gets a replacement vector or, if none exists, zeros.
+func (kr *krylov) appendImage(c int) error {
 	k, ld := kr.k, kr.ld
 	w := kr.row(k)
-	qc := kr.row(c)
-	if floats.Norm(qc, math.Inf(1)) == 0 {
+	if floats.Norm(kr.row(c), math.Inf(1)) == 0 {
 		for j := range w {
 			w[j] = 0
 		}
@@ -173,10 +175,6 @@ func (kr *krylov) expandRow(c int) error {
 		kr.k++
 		return nil
 	}
-	if err := kr.op.apply(w, qc, kr.brow(c)); err != nil {
-		return err
-	}
-	kr.solves++
 	col := make([]float64, k)
 	kr.orth(w, k, col)
 	scale := floats.Norm(col, 2)
@@ -202,11 +200,31 @@ func (kr *krylov) expandRow(c int) error {
 	return nil
 }
 
-// expand expands the residual block, appending a new one.
+// expand expands the residual block, appending a new one. The OP images
+// of the whole block are computed together, in one pass over the factor.
 func (kr *krylov) expand() error {
-	c0 := kr.k - kr.p
+	c0, k := kr.k-kr.p, kr.k
+	var dst, xs, bxs [][]float64
 	for i := 0; i < kr.p; i++ {
-		if err := kr.expandRow(c0 + i); err != nil {
+		w := kr.row(k + i)
+		if floats.Norm(kr.row(c0+i), math.Inf(1)) == 0 {
+			for j := range w {
+				w[j] = 0
+			}
+			continue
+		}
+		dst = append(dst, w)
+		xs = append(xs, kr.row(c0+i))
+		bxs = append(bxs, kr.brow(c0+i))
+	}
+	if len(dst) > 0 {
+		if err := kr.op.applyMany(dst, xs, bxs); err != nil {
+			return err
+		}
+		kr.solves += len(dst)
+	}
+	for i := 0; i < kr.p; i++ {
+		if err := kr.appendImage(c0 + i); err != nil {
 			return err
 		}
 	}

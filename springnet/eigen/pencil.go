@@ -109,6 +109,37 @@ func (pc *pencil) solve(dst, b []float64) float64 {
 	return eta
 }
 
+// solveMany solves A·dst[i] = b[i] for a block in one pass over the
+// factor, refining any solution whose backward error is not small, and
+// returns the largest backward error.
+func (pc *pencil) solveMany(dst, b [][]float64) float64 {
+	if !useSolveMany {
+		var worst float64
+		for i := range dst {
+			worst = math.Max(worst, pc.solve(dst[i], b[i]))
+		}
+		return worst
+	}
+	pc.f.SolveMany(dst, b)
+	var worst float64
+	for i := range dst {
+		eta := pc.backward(dst[i], b[i])
+		if eta > 1e-14 {
+			pc.f.Solve(pc.x, pc.r)
+			floats.Sub(dst[i], pc.x)
+			eta = pc.backward(dst[i], b[i])
+		}
+		worst = math.Max(worst, eta)
+	}
+	return worst
+}
+
+// useSolveMany selects sparse.Factor.SolveMany for the blocks of the
+// Lanczos process. Measured on the 20³ benchmark lattice (block of 2) it
+// took 1.8 times as long per right-hand side as Factor.Solve, whose kernels
+// are the tuned ones, so it is off; turn it on when the block solve wins.
+const useSolveMany = false
+
 // backward sets pc.r = A·x − b and returns the normwise backward error.
 func (pc *pencil) backward(x, b []float64) float64 {
 	r := pc.r
@@ -134,6 +165,13 @@ type shiftInvert struct {
 func (op *shiftInvert) apply(dst, x, mx []float64) error {
 	if res := op.pc.solve(dst, mx); !(res <= solveResidualTol) {
 		return fmt.Errorf("eigen: solve with K − σM (σ = %.6g) has relative residual %.3g", -op.pc.alpha, res)
+	}
+	return nil
+}
+
+func (op *shiftInvert) applyMany(dst, x, mx [][]float64) error {
+	if res := op.pc.solveMany(dst, mx); !(res <= solveResidualTol) {
+		return fmt.Errorf("eigen: solve with K − σM (σ = %.6g) has backward error %.3g", -op.pc.alpha, res)
 	}
 	return nil
 }
