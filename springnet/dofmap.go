@@ -267,7 +267,7 @@ func prepare(m *Model, l materials.Level) (*net, error) {
 	for _, pm := range m.masses {
 		o, at := d.placeOwner(m, pm.on)
 		at = at.Add(pm.m.Offset)
-		if o < nn && (pm.m.Inertia != (Vec{}) || (at.Sub(d.ownerRef[o]).Norm() > 0 && pm.m.Kg > 0)) {
+		if o < nn && (pm.m.Inertia != (Vec{}) || pm.m.Products != (Vec{}) || (at.Sub(d.ownerRef[o]).Norm() > 0 && pm.m.Kg > 0)) {
 			reach[o] |= Rotations
 		}
 	}

@@ -53,7 +53,7 @@ func (nt *net) elemLumpedMass(i int, k *[12][12]float64, dofs *[12]edof) int {
 
 // pointMassBlocks returns, per owner, the 6×6 rigid-body mass of the added
 // masses about the owner's reference point: for a mass m with inertia
-// J = diag(Jx, Jy, Jz) at offset r, M = Tᵀ·diag(m, m, m, J)·T with
+// tensor J (Mass.Tensor) at offset r, M = Tᵀ·diag(m, m, m, J)·T with
 // T = [I, −[r]×; 0, I] (u_p = u_o + θ × r).
 func (nt *net) pointMassBlocks() [][6][6]float64 {
 	d := &nt.dm
@@ -80,9 +80,12 @@ func (nt *net) pointMassBlocks() [][6][6]float64 {
 				blk[a][b] += pm.m.Kg * s
 			}
 		}
-		blk[3][3] += pm.m.Inertia.X
-		blk[4][4] += pm.m.Inertia.Y
-		blk[5][5] += pm.m.Inertia.Z
+		jt := pm.m.Tensor()
+		for a := 0; a < 3; a++ {
+			for b := 0; b < 3; b++ {
+				blk[3+a][3+b] += jt[a][b]
+			}
+		}
 	}
 	return out
 }

@@ -124,22 +124,13 @@ func MachineBox(kg float64, cg, size Vec) Machine {
 	return Machine{Kg: kg, CG: cg, Inertia: [3][3]float64{{j.X, 0, 0}, {0, j.Y, 0}, {0, 0, j.Z}}}
 }
 
-// Masses returns point masses (for Model.AddMass on the same place) that
-// together have exactly the machine's mass, centre of gravity and inertia
-// tensor. A tensor with no off-diagonal terms gives one Mass. Otherwise,
-// since Mass holds only moments about axes parallel to X, Y and Z, the
-// tensor is built from three pairs of equal masses placed symmetrically
-// about the CG along its principal axes eₖ: a pair of total mass m/3 at
-// ±dₖ·eₖ adds (m/3)·dₖ²·(I − eₖeₖᵀ), so with aₖ = (m/3)·dₖ² and principal
-// moments Jₖ
-//
-//	J = Σₖ (S − aₖ)·eₖeₖᵀ,  S = Σ aₖ  ⇒  aₖ = (J₁ + J₂ + J₃)/2 − Jₖ
-//
-// which is non-negative exactly when the tensor obeys the triangle
-// inequality of a physical body. The pairs change neither the weight nor
-// its line of action (they are symmetric about the CG). It fails for a
-// negative or non-finite mass, an asymmetric tensor, or one no body can
-// have.
+// Masses returns the machine as a Mass (for Model.AddMass on the same
+// place): its mass, centre of gravity as Offset, and the tensor as
+// moments (Inertia) and products of inertia (Products = the tensor's
+// off-diagonal terms negated; see Mass). It returns a slice, of one Mass,
+// as it always has. It fails for a negative or non-finite mass, an
+// asymmetric tensor, or one no body can have (a negative principal
+// moment, or one larger than the sum of the other two).
 func (mc Machine) Masses() ([]Mass, error) {
 	if !finite(mc.Kg) || mc.Kg < 0 || !mc.CG.finite() {
 		return nil, fmt.Errorf("springnet: machine: mass %g kg at %v must be finite and non-negative", mc.Kg, mc.CG)
@@ -156,39 +147,47 @@ func (mc Machine) Masses() ([]Mass, error) {
 			}
 		}
 	}
-	if j[0][1] == 0 && j[0][2] == 0 && j[1][2] == 0 {
-		d := Vec{j[0][0], j[1][1], j[2][2]}
-		if d.X < 0 || d.Y < 0 || d.Z < 0 || d.X > d.Y+d.Z+1e-12*scale || d.Y > d.X+d.Z+1e-12*scale || d.Z > d.X+d.Y+1e-12*scale {
-			return nil, fmt.Errorf("springnet: machine: moments of inertia %v are not those of a body (each must be at most the sum of the other two)", d)
-		}
-		return []Mass{{Kg: mc.Kg, Offset: mc.CG, Inertia: d}}, nil
+	ms := Mass{Kg: mc.Kg, Offset: mc.CG,
+		Inertia: Vec{j[0][0], j[1][1], j[2][2]},
+		Products: Vec{
+			X: -(j[1][2] + j[2][1]) / 2,
+			Y: -(j[0][2] + j[2][0]) / 2,
+			Z: -(j[0][1] + j[1][0]) / 2,
+		}}
+	if err := bodyTensor(ms.Tensor()); err != nil {
+		return nil, fmt.Errorf("springnet: machine: %w", err)
 	}
-	if !(mc.Kg > 0) {
-		return nil, errors.New("springnet: machine: an inertia tensor needs a positive mass")
-	}
+	return []Mass{ms}, nil
+}
+
+// bodyTensor checks that the symmetric tensor j [kg·m²] is one a body can
+// have: finite, principal moments non-negative (positive semidefinite) and
+// each at most the sum of the other two (the triangle inequality, from
+// J₁ + J₂ − J₃ = 2∫z'² dm ≥ 0 in principal axes). Round-off of 1e-12 of
+// the trace is allowed.
+func bodyTensor(j [3][3]float64) error {
 	s := mat.NewSymDense(3, nil)
+	scale := 0.0
 	for r := 0; r < 3; r++ {
 		for c := r; c < 3; c++ {
+			if !finite(j[r][c]) || !finite(j[c][r]) {
+				return errors.New("inertia tensor is not finite")
+			}
 			s.SetSym(r, c, (j[r][c]+j[c][r])/2)
 		}
+		scale += math.Abs(j[r][r])
 	}
 	var es mat.EigenSym
-	if !es.Factorize(s, true) {
-		return nil, errors.New("springnet: machine: inertia tensor: eigen decomposition failed")
+	if !es.Factorize(s, false) {
+		return errors.New("inertia tensor: eigen decomposition failed")
 	}
-	jk := es.Values(nil)
-	var ev mat.Dense
-	es.VectorsTo(&ev)
-	half := (jk[0] + jk[1] + jk[2]) / 2
-	out := make([]Mass, 0, 6)
+	p := es.Values(nil)
+	tol := 1e-12 * scale
 	for k := 0; k < 3; k++ {
-		a := half - jk[k]
-		if a < -1e-12*scale || jk[k] < -1e-12*scale {
-			return nil, fmt.Errorf("springnet: machine: principal moments %.6g, %.6g, %.6g kg·m² are not those of a body (each must be at most the sum of the other two)", jk[0], jk[1], jk[2])
+		if p[k] < -tol || p[k] > p[(k+1)%3]+p[(k+2)%3]+tol {
+			return fmt.Errorf("principal moments of inertia %.6g, %.6g, %.6g kg·m² are not those of a body "+
+				"(each must be non-negative and at most the sum of the other two)", p[0], p[1], p[2])
 		}
-		d := math.Sqrt(math.Max(a, 0) / (mc.Kg / 3))
-		e := Vec{ev.At(0, k), ev.At(1, k), ev.At(2, k)}
-		out = append(out, Mass{Kg: mc.Kg / 6, Offset: mc.CG.Add(e.Scale(d))}, Mass{Kg: mc.Kg / 6, Offset: mc.CG.Sub(e.Scale(d))})
 	}
-	return out, nil
+	return nil
 }

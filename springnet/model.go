@@ -125,10 +125,38 @@ type pointMass struct {
 }
 
 // Mass is a lumped mass attached rigidly to a node, rigid group or mount.
+//
+// Inertia and Products describe its inertia about axes through the centre
+// of mass parallel to X, Y, Z. Products holds the products of inertia
+// P_yz = ∫y·z dm, P_zx = ∫z·x dm, P_xy = ∫x·y dm (in X, Y, Z), positive
+// as integrals; the inertia tensor's off-diagonal terms are their
+// negatives (see Tensor):
+//
+//	J = [ Jx    −P_xy  −P_zx ]
+//	    [ −P_xy  Jy    −P_yz ]
+//	    [ −P_zx −P_yz   Jz   ]
+//
+// A body's tensor is positive semidefinite and its principal moments obey
+// the triangle inequality; Validate checks both when Products is given
+// (with Products zero, each moment need only be non-negative, so a rotary
+// inertia about one axis stays allowed). Machine.Masses fills Products
+// from a tensor.
 type Mass struct {
-	Kg      float64 // mass [kg]
-	Offset  Vec     // centre of mass relative to the place it is attached to [m]
-	Inertia Vec     // moments of inertia about axes through the centre of mass parallel to X, Y, Z [kg·m²]
+	Kg       float64 // mass [kg]
+	Offset   Vec     // centre of mass relative to the place it is attached to [m]
+	Inertia  Vec     // moments of inertia about axes through the centre of mass parallel to X, Y, Z [kg·m²]
+	Products Vec     // products of inertia P_yz, P_zx, P_xy about the centre of mass [kg·m²]
+}
+
+// Tensor returns the inertia tensor of ms about its centre of mass in
+// global axes [kg·m²]: moments on the diagonal, −products off it.
+func (ms Mass) Tensor() [3][3]float64 {
+	j, p := ms.Inertia, ms.Products
+	return [3][3]float64{
+		{j.X, -p.Z, -p.Y},
+		{-p.Z, j.Y, -p.X},
+		{-p.Y, -p.X, j.Z},
+	}
 }
 
 type placedLoad struct {

@@ -126,6 +126,12 @@ func (m *Model) Validate() error {
 		}
 		if !ms.Inertia.finite() || ms.Inertia.X < 0 || ms.Inertia.Y < 0 || ms.Inertia.Z < 0 {
 			add("mass %d at %s: inertia %v must be finite and non-negative", i, where, ms.Inertia)
+		} else if !ms.Products.finite() {
+			add("mass %d at %s: products of inertia %v are not finite", i, where, ms.Products)
+		} else if ms.Products != (Vec{}) {
+			if err := bodyTensor(ms.Tensor()); err != nil {
+				add("mass %d at %s: %v", i, where, err)
+			}
 		}
 	}
 	seen = make(map[string]bool)
