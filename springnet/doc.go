@@ -101,6 +101,27 @@
 // capacities, so check members and stability against local codes and
 // licensed engineering practice.
 //
+// # Dynamics
+//
+// Modes finds the lowest natural modes, K·φ = ω²·M·φ, with the consistent
+// or lumped mass of bars and beams (MassMatrix) plus the point masses
+// (Mass, with moments and products of inertia), by sparse shift-invert
+// Lanczos or dense for small models, and checks by a Sturm-sequence count
+// that no mode below the highest found was missed. Rigid-body and
+// mechanism modes (ω ≈ 0, a stand with too few supports) are returned and
+// flagged, not treated as errors. Modal damping follows the modal strain
+// energy method: the loss factor of a mode is η = Σ ηᵢ·Uᵢ / Σ Uᵢ over the
+// strain energy Uᵢ each element, or each part of a composite section,
+// stores in the mode (Model.LossFactor), and ζ = η/2. Response gives
+// receptance and dynamic stiffness between two places by modal
+// superposition of the modes found, with the static residual flexibility
+// of the modes left out added back. CheckExcitation compares the natural
+// frequencies with the harmonics of running speeds and flags those
+// within a margin of an excitation band (20 % by default, common
+// practice). Mode shapes are scaled to unit modal mass (φᵀ·M·φ = 1), and
+// modal quantities (participation, effective mass, receptance) use that
+// scaling.
+//
 // # Errors
 //
 // Errors start with "springnet:" and name the item. A free motion is a

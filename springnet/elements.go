@@ -304,25 +304,60 @@ func abs(x float64) float64 {
 	return x
 }
 
-// lossOf returns the loss factor to use: given, else the material's.
-func lossOf(given materials.Range, mat materials.Material) materials.Range {
-	if given != (materials.Range{}) {
-		return given
-	}
-	return mat.Loss
-}
-
 // LossFactor returns the damping loss factor range of element e: its own
 // Loss, else its material's Loss (zero for springs and feet without one).
+//
+// For a member with a composite section and no Loss of its own, the
+// parts' materials apply (Modes splits each element's strain energy over
+// its parts), so LossFactor returns the range spanning the stiff parts
+// (MassOnly parts store no strain energy and are left out): Low and High
+// are the least Low and greatest High of the parts, Nominal their
+// nominal loss factors weighted by nominal axial stiffness Eₚ·Aₚ (exact
+// for uniform axial strain; in bending the split differs, see
+// Modes). A section whose parts cannot be read falls back to the
+// member's Material.
 func (m *Model) LossFactor(e ElementID) materials.Range {
 	x := m.el(e)
 	switch x.kind {
 	case BarKind:
-		return lossOf(x.bar.Loss, x.bar.Material)
+		return memberLoss(x.bar.Loss, x.bar.Material, x.bar.Section)
 	case BeamKind:
-		return lossOf(x.beam.Loss, x.beam.Material)
+		return memberLoss(x.beam.Loss, x.beam.Material, x.beam.Section)
 	case SpringKind:
 		return x.spring.Loss
 	}
 	return x.foot.Loss
+}
+
+// memberLoss returns a member's loss factor range (see Model.LossFactor).
+func memberLoss(given materials.Range, mat materials.Material, sec sections.Section) materials.Range {
+	if given != (materials.Range{}) {
+		return given
+	}
+	c, ok := sec.(sections.Composite)
+	if !ok {
+		return mat.Loss
+	}
+	parts, err := c.Parts()
+	if err != nil {
+		return mat.Loss
+	}
+	out := materials.Range{Low: math.Inf(1), High: math.Inf(-1)}
+	sw, sn := 0.0, 0.0
+	for _, p := range parts {
+		if p.Material.MassOnly {
+			continue
+		}
+		l := p.Material.Loss
+		out.Low = math.Min(out.Low, l.Low)
+		out.High = math.Max(out.High, l.High)
+		w := p.Material.E.Nominal * p.A
+		sw += w
+		sn += w * l.Nominal
+	}
+	if !(sw > 0) || math.IsInf(out.Low, 0) {
+		return mat.Loss
+	}
+	out.Nominal = sn / sw
+	return out
 }
