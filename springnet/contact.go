@@ -228,8 +228,7 @@ func (s *Solver) tipping(nt *net, fg, fv []float64, co []int, tol float64) (Tipp
 	ug, uv := make([]float64, n), make([]float64, n)
 	lam := 1.0
 	last := ""
-	seen := make(map[string]int) // contact sets visited at this λ → index into flips
-	var flips []int
+	path := contactPath{seen: make(map[string]int)} // contact sets visited at this λ
 	maxEvents := 50*len(co) + 100
 	for ev := 0; ev < maxEvents; ev++ {
 		if err := s.factor(nt); err != nil {
@@ -258,17 +257,8 @@ func (s *Solver) tipping(nt *net, fg, fv []float64, co []int, tol float64) (Tipp
 			}
 		}
 		if flip >= 0 {
-			if cyc, ok := nt.visit(seen, &flips, flip, co); !ok {
-				if !nt.hold(cyc, co) {
-					return Tipping{Note: fmt.Sprintf("the contact of the feet did not settle at %.4g × the loads", lam)}, nil
-				}
-				clear(seen)
-				flips = flips[:0]
-				continue
-			}
-			nt.el[flip].active = !nt.el[flip].active
-			if !nt.el[flip].active {
-				last = nt.m.elems[flip].foot.Name
+			if _, stuck := nt.flipOnPath(&path, flip, co, &last); stuck {
+				return Tipping{Note: fmt.Sprintf("the contact of the feet did not settle at %.4g × the loads", lam)}, nil
 			}
 			continue
 		}
@@ -289,24 +279,46 @@ func (s *Solver) tipping(nt *net, fg, fv []float64, co []int, tol float64) (Tipp
 			return Tipping{}, nil
 		}
 		if next > lam*(1+eventTol) {
-			clear(seen)
-			flips = flips[:0]
-		} else if cyc, ok := nt.visit(seen, &flips, who, co); !ok {
-			// The event undoes the consistency step at the same λ.
-			if !nt.hold(cyc, co) {
-				return Tipping{Note: fmt.Sprintf("the contact of the feet did not settle at %.4g × the loads", lam)}, nil
-			}
-			clear(seen)
-			flips = flips[:0]
-			continue
+			path.reset() // a new λ: sets seen before are no cycle
 		}
-		nt.el[who].active = !nt.el[who].active
-		if !nt.el[who].active {
-			last = nt.m.elems[who].foot.Name
+		// At the same λ the event can undo the consistency step: a cycle.
+		flipped, stuck := nt.flipOnPath(&path, who, co, &last)
+		if stuck {
+			return Tipping{Note: fmt.Sprintf("the contact of the feet did not settle at %.4g × the loads", lam)}, nil
 		}
-		lam = next
+		if flipped {
+			lam = next
+		}
 	}
 	return Tipping{Note: fmt.Sprintf("the contact path did not end in %d changes of contact (last at %.4g × the loads)", maxEvents, lam)}, nil
+}
+
+// contactPath remembers the contact sets visited at one load factor and
+// the feet flipped since, to find a cycle.
+type contactPath struct {
+	seen  map[string]int // contact set → index into flips when visited
+	flips []int
+}
+
+func (p *contactPath) reset() {
+	clear(p.seen)
+	p.flips = p.flips[:0]
+}
+
+// flipOnPath flips foot i (naming it in *last when it lifts) unless the
+// current contact set was visited before at this load factor: then it
+// holds the feet flipped since (see contact), forgets the visits and
+// returns flipped false; stuck when there was nothing left to hold.
+func (nt *net) flipOnPath(p *contactPath, i int, co []int, last *string) (flipped, stuck bool) {
+	if cyc, ok := nt.visit(p.seen, &p.flips, i, co); !ok {
+		p.reset()
+		return false, !nt.hold(cyc, co)
+	}
+	nt.el[i].active = !nt.el[i].active
+	if !nt.el[i].active {
+		*last = nt.m.elems[i].foot.Name
+	}
+	return true, false
 }
 
 // visit records the current contact set of the feet co in seen and the

@@ -42,6 +42,11 @@ func (nt *net) elemEnergy(i int, u []float64, x *[12]float64) float64 {
 	var dofs [12]edof
 	nd := nt.elemStiffness(i, &k, &dofs)
 	nt.elemValues(&dofs, nd, u, x)
+	return quadHalf(&k, nd, x)
+}
+
+// quadHalf returns ½·xᵀ·k·x over the leading nd entries.
+func quadHalf(k *[12][12]float64, nd int, x *[12]float64) float64 {
 	s := 0.0
 	for a := 0; a < nd; a++ {
 		r := 0.0
@@ -265,15 +270,7 @@ func (bk *energyBook) tallyAll(nt *net, us [][]float64) []*energyTally {
 		for v, u := range us {
 			t := out[v]
 			nt.elemValues(&dofs, nd, u, &x)
-			ue := 0.0
-			for a := 0; a < nd; a++ {
-				r := 0.0
-				for b := 0; b < nd; b++ {
-					r += k[a][b] * x[b]
-				}
-				ue += x[a] * r
-			}
-			ue /= 2
+			ue := quadHalf(&k, nd, &x)
 			t.elem[i] = ue
 			t.total += ue
 			if ue == 0 {

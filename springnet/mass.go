@@ -1,7 +1,6 @@
 package springnet
 
 import (
-	"github.com/trestle-go/trestle/springnet/element"
 	"github.com/trestle-go/trestle/springnet/sparse"
 )
 
@@ -10,45 +9,7 @@ import (
 // element package's lumped matrix with HRZ rotary terms (so beam-end
 // rotations carry mass); springs and feet are massless.
 func (nt *net) elemLumpedMass(i int, k *[12][12]float64, dofs *[12]edof) int {
-	e := &nt.m.elems[i]
-	p := &nt.el[i]
-	nd := 0
-	switch e.kind {
-	case BarKind:
-		mb := element.BarLumpedMass(p.frame, p.mp.lineMass)
-		for c := 0; c < 3; c++ {
-			dofs[nd] = edof{e.a, c}
-			nd++
-		}
-		for c := 0; c < 3; c++ {
-			dofs[nd] = edof{e.b, c}
-			nd++
-		}
-		for r := 0; r < 6; r++ {
-			copy(k[r][:6], mb[r][:])
-		}
-	case BeamKind:
-		mb := element.BeamLumpedMass(p.frame, p.mp.lineMass, p.mp.polarMass, true)
-		var keep [12]int
-		for c := 0; c < 12; c++ {
-			n, comp := e.a, c
-			if c >= 6 {
-				n, comp = e.b, c-6
-			}
-			if comp >= 3 && ((c < 6 && !p.rotA) || (c >= 6 && !p.rotB)) {
-				continue
-			}
-			keep[nd] = c
-			dofs[nd] = edof{n, comp}
-			nd++
-		}
-		for r := 0; r < nd; r++ {
-			for c := 0; c < nd; c++ {
-				k[r][c] = mb[keep[r]][keep[c]]
-			}
-		}
-	}
-	return nd
+	return nt.memberMass(i, Lumped, k, dofs)
 }
 
 // pointMassBlocks returns, per owner, the 6×6 rigid-body mass of the added

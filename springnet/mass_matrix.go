@@ -41,45 +41,34 @@ func (k MassMatrix) String() string {
 // the same DOF list elemStiffness uses for bars and beams [kg, kg·m,
 // kg·m²]; springs and feet are massless (0 DOF).
 func (nt *net) elemConsistentMass(i int, k *[12][12]float64, dofs *[12]edof) int {
+	return nt.memberMass(i, Consistent, k, dofs)
+}
+
+// memberMass writes the mass matrix of the chosen kind of bar or beam i
+// over its stiffness DOF list (barMatrix, beamMatrix) and returns the
+// number of DOF; springs and feet are massless (0).
+func (nt *net) memberMass(i int, kind MassMatrix, k *[12][12]float64, dofs *[12]edof) int {
 	e := &nt.m.elems[i]
 	p := &nt.el[i]
-	nd := 0
 	switch e.kind {
 	case BarKind:
-		mb := element.BarConsistentMass(p.frame, p.mp.lineMass)
-		for c := 0; c < 3; c++ {
-			dofs[nd] = edof{e.a, c}
-			nd++
+		var mb element.Mat6
+		if kind == Lumped {
+			mb = element.BarLumpedMass(p.frame, p.mp.lineMass)
+		} else {
+			mb = element.BarConsistentMass(p.frame, p.mp.lineMass)
 		}
-		for c := 0; c < 3; c++ {
-			dofs[nd] = edof{e.b, c}
-			nd++
-		}
-		for r := 0; r < 6; r++ {
-			copy(k[r][:6], mb[r][:])
-		}
+		return barMatrix(e, &mb, k, dofs)
 	case BeamKind:
-		mb := element.BeamConsistentMass(p.frame, p.bp, p.mp.lineMass, p.mp.polarMass)
-		var keep [12]int
-		for c := 0; c < 12; c++ {
-			n, comp := e.a, c
-			if c >= 6 {
-				n, comp = e.b, c-6
-			}
-			if comp >= 3 && ((c < 6 && !p.rotA) || (c >= 6 && !p.rotB)) {
-				continue
-			}
-			keep[nd] = c
-			dofs[nd] = edof{n, comp}
-			nd++
+		var mb element.Mat12
+		if kind == Lumped {
+			mb = element.BeamLumpedMass(p.frame, p.mp.lineMass, p.mp.polarMass, true)
+		} else {
+			mb = element.BeamConsistentMass(p.frame, p.bp, p.mp.lineMass, p.mp.polarMass)
 		}
-		for r := 0; r < nd; r++ {
-			for c := 0; c < nd; c++ {
-				k[r][c] = mb[keep[r]][keep[c]]
-			}
-		}
+		return p.beamMatrix(e, &mb, k, dofs)
 	}
-	return nd
+	return 0
 }
 
 // assembleMassOf returns the mass matrix of the chosen kind over the free

@@ -320,17 +320,8 @@ func (r *ModeResult) staticCompliance(oo int, ao Vec, co int, oi int, ai Vec, ci
 		return 0, 0, fmt.Errorf("no residual flexibility: %w", err)
 	}
 	d := &nt.dm
-	ol := make([][6]float64, len(d.ownerRef))
-	var fo, mo Vec
-	if ci < 3 {
-		fo = unitVec(ci)
-	} else {
-		mo = unitVec(ci - 3)
-	}
-	d.addOwnerLoad(ol, oi, ai, fo, mo)
-	b := d.eqVector(nil, ol)
 	u := make([]float64, d.n)
-	res := sv.solve(u, b)
+	res := sv.unitLoadSolve(d, oi, ai, ci, make([][6]float64, len(d.ownerRef)), u)
 	if !finiteAll(u) {
 		return 0, 0, errors.New("no residual flexibility: the static solve failed")
 	}
