@@ -71,7 +71,8 @@
 // sideways springs kept (FootResult.Held). The tipping margin follows the
 // contact path exactly (see Tipping). System exports K, the
 // lumped mass and the loads (Matrix Market). Sweep runs the statics, the
-// mount stiffness at every mount and, if asked, buckling at the Low,
+// mount stiffness at every mount and, if asked, buckling and the lowest
+// natural frequencies (SweepSettings.Modes) at the Low,
 // Nominal and High material levels with one Solver and returns each
 // governing number as a Spread: its value per level and its min–max
 // range (not assumed monotone in E).

@@ -6,6 +6,7 @@ import (
 	"math"
 
 	"github.com/trestle-go/trestle/materials"
+	"github.com/trestle-go/trestle/springnet/eigen"
 )
 
 // SweepSettings controls Sweep. A nil *SweepSettings means defaults; zero
@@ -22,6 +23,12 @@ type SweepSettings struct {
 	// of every case at every level and reports the lowest positive load
 	// factor.
 	Buckling bool
+	// Modes asks for the lowest Modes natural frequencies at every level
+	// (Modes at that Level); 0: none. Rigid-body modes count, at 0 Hz.
+	Modes int
+	// ModeMass picks the mass matrix of bars and beams for Modes; the
+	// zero value is Consistent.
+	ModeMass MassMatrix
 }
 
 // Spread is one governing number over the material levels.
@@ -109,6 +116,15 @@ type SweepResult struct {
 	// positive load factor at every level.
 	Buckling    Spread
 	HasBuckling bool
+	// Frequencies holds the i-th lowest natural frequency [Hz] over the
+	// levels (SweepSettings.Modes), for as many modes as were found at
+	// every level (a model with fewer modes gives fewer); nil when none
+	// were asked for. Frequencies[0] is the first natural frequency.
+	Frequencies []Spread
+	// ModeResults holds the modal results per level, in materials.Levels
+	// order, when modes were asked for (shapes, damping, rigid-body
+	// flags).
+	ModeResults [3]*ModeResult
 }
 
 // lowest collects the smallest value per level of a governing number
@@ -138,10 +154,12 @@ func (w *lowest) spread() (Spread, bool) {
 // symbolic analysis of K is done once and each level only refactorises:
 // Static (every case), the mount stiffness at each place (one
 // factorisation per level for all places, every foot in contact, as in
-// MountStiffness) and, if asked, Buckling of every case. It returns the
-// governing numbers as Spreads: mount stiffness along X, Y, Z and the
-// softest principal one, the largest displacement and utilisation, the
-// lowest member Euler margin, tipping factor and buckling factor.
+// MountStiffness) and, if asked, Buckling of every case and the lowest
+// natural frequencies (Modes; its eigen solver factorises K − σM itself,
+// once per level). It returns the governing numbers as Spreads: mount
+// stiffness along X, Y, Z and the softest principal one, the largest
+// displacement and utilisation, the lowest member Euler margin, tipping
+// factor and buckling factor, and the lowest natural frequencies.
 //
 // Errors are those of the analyses, wrapped with the level; no result is
 // returned then. A solve whose residual exceeds MaxResidual gives the
@@ -152,6 +170,9 @@ func (w *lowest) spread() (Spread, bool) {
 func (s *Solver) Sweep(m *Model, st *SweepSettings) (*SweepResult, error) {
 	if st == nil {
 		st = &SweepSettings{}
+	}
+	if st.Modes < 0 {
+		return nil, fmt.Errorf("springnet: sweep: %d modes asked for", st.Modes)
 	}
 	places := st.Places
 	if places == nil {
@@ -237,6 +258,31 @@ func (s *Solver) Sweep(m *Model, st *SweepSettings) (*SweepResult, error) {
 				}
 				buck.take(li, br.Factor(0))
 			}
+		}
+
+		if st.Modes > 0 {
+			mr, err := Modes(m, &ModeSettings{Count: st.Modes, Mass: st.ModeMass, Level: l})
+			var few *eigen.FewerModesError
+			if !(errors.As(err, &few) && mr != nil) {
+				if err = keep(err); err != nil {
+					return nil, wrap(err)
+				}
+			}
+			res.ModeResults[li] = mr
+		}
+	}
+	if st.Modes > 0 {
+		n := st.Modes
+		for _, mr := range res.ModeResults {
+			n = min(n, mr.NumModes())
+		}
+		res.Frequencies = make([]Spread, n)
+		for i := range res.Frequencies {
+			var f [3]float64
+			for li, mr := range res.ModeResults {
+				f[li] = mr.Frequency(i)
+			}
+			res.Frequencies[i] = spreadOf(f)
 		}
 	}
 	res.MaxDisplacement = spreadOf(disp)

@@ -195,3 +195,53 @@ func BenchmarkSweep(b *testing.B) {
 		}
 	})
 }
+
+func TestSweepFrequency(t *testing.T) {
+	// A mass m on a massless bar of stiffness k = E·A/L, free only along
+	// the bar, is one DOF: f = √(k/m)/2π at each level of E (any vibration
+	// text, e.g. Thomson & Dahleh, Theory of Vibration with Applications,
+	// §2.1, section number from memory).
+	const l, d, kg = 0.8, 0.015, 250.0
+	area := math.Pi * d * d / 4
+	mat := spreadSteel()
+	mat.Density = 0 // massless bar: the point mass alone
+	var m springnet.Model
+	a := m.AddNode("a", springnet.Vec{})
+	b := m.AddNode("b", springnet.Vec{Z: l})
+	m.Fix(a, springnet.Translations)
+	m.Fix(b, springnet.UX|springnet.UY)
+	m.AddBar(a, b, springnet.Bar{Material: mat, Section: sections.Round{D: d}})
+	m.AddMass(b, springnet.Mass{Kg: kg})
+	m.AddLoad(b, springnet.Load{FZ: -kg * springnet.StandardGravity}) // Sweep's statics need a case
+
+	for _, kind := range []springnet.MassMatrix{springnet.Consistent, springnet.Lumped} {
+		t.Run(kind.String(), func(t *testing.T) {
+			var s springnet.Solver
+			// Three asked for, one there: the model's one mode.
+			res, err := s.Sweep(&m, &springnet.SweepSettings{Modes: 3, ModeMass: kind})
+			require.NoError(t, err)
+			require.Len(t, res.Frequencies, 1)
+			f := res.Frequencies[0]
+			for i, lv := range materials.Levels {
+				want := math.Sqrt(mat.E.At(lv)*area/l/kg) / (2 * math.Pi)
+				assert.InEpsilon(t, want, f.ByLevel[i], sweepTol, "%v", lv)
+				require.NotNil(t, res.ModeResults[i])
+				assert.Equal(t, res.ModeResults[i].Frequency(0), f.ByLevel[i])
+			}
+			// f rises with E: the range runs from the Low to the High level.
+			assert.InEpsilon(t, math.Sqrt(mat.E.Low*area/l/kg)/(2*math.Pi), f.Range.Low, sweepTol)
+			assert.InEpsilon(t, math.Sqrt(mat.E.High*area/l/kg)/(2*math.Pi), f.Range.High, sweepTol)
+			assert.InEpsilon(t, math.Sqrt(mat.E.Nominal*area/l/kg)/(2*math.Pi), f.Range.Nominal, sweepTol)
+		})
+	}
+	t.Run("none asked", func(t *testing.T) {
+		res, err := springnet.Sweep(&m, nil)
+		require.NoError(t, err)
+		assert.Nil(t, res.Frequencies)
+		assert.Nil(t, res.ModeResults[0])
+	})
+	t.Run("negative", func(t *testing.T) {
+		_, err := springnet.Sweep(&m, &springnet.SweepSettings{Modes: -1})
+		assert.ErrorContains(t, err, "springnet: sweep")
+	})
+}
