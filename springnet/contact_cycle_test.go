@@ -132,6 +132,18 @@ func TestContactCycleBench(t *testing.T) {
 	fr, _ := cr.Foot(cr.Lifted()[0])
 	assert.Equal(t, "pad-4", fr.Name)
 	assert.True(t, fr.Held, "pad-4 is lifted but held sideways")
+	// The loads the statics check below uses: the planing case is the own
+	// weight plus 120 lbf along X and 40 lbf down at FL-top (0, 0, 33 in);
+	// its moment about the origin is r × F = (0, 33 in · 120 lbf, 0)
+	// (1 lbf = 4.4482216152605 N, 1 in = 0.0254 m, exact by definition).
+	w, ok := f.CaseIDs["own weight"]
+	require.True(t, ok)
+	const lbf, in = 4.4482216152605, 0.0254
+	ap, aw := cr.Equilibrium().Applied, res.Case(w).Equilibrium().Applied
+	assert.InDelta(t, 120*lbf, ap.FX-aw.FX, staticsTol*120*lbf)
+	assert.InDelta(t, -40*lbf, ap.FZ-aw.FZ, staticsTol*120*lbf)
+	assert.InDelta(t, 33*in*120*lbf, ap.MY-aw.MY, staticsTol*33*in*120*lbf)
+	assert.InDelta(t, 0, ap.MX-aw.MX, staticsTol*33*in*120*lbf)
 	// Three pads carry the bench: their vertical reactions are those of
 	// rigid-body statics (the held pad's sideways force acts at floor level).
 	assert.True(t, checkDeterminate(t, f.Model, cr))

@@ -65,17 +65,16 @@
 // entering and leaving contact, refactorises only). Compression-only feet
 // are solved by an active-set loop of linear solves: the worst violation
 // first, then, once a contact set repeats, one foot at a time by Murty's
-// least-index rule. A loose foot drops all its springs when it lifts, so
-// a foot can have no consistent state (down it pulls, lifted the frame
-// racks and it presses into the floor); it is then held: lifted, its
-// sideways springs kept (FootResult.Held). The tipping margin follows the
-// contact path exactly (see Tipping). System exports K, the
-// lumped mass and the loads (Matrix Market). Sweep runs the statics, the
-// mount stiffness at every mount and, if asked, buckling and the lowest
-// natural frequencies (SweepSettings.Modes) at the Low,
-// Nominal and High material levels with one Solver and returns each
-// governing number as a Spread: its value per level and its min–max
-// range (not assumed monotone in E).
+// least-index rule. A loose foot drops all its springs when it lifts, so a
+// foot can have no consistent state (down it pulls, lifted the frame racks
+// and it presses into the floor); it is then held: lifted, its sideways
+// springs kept (FootResult.Held). The tipping margin follows the contact
+// path exactly (see Tipping). System exports K, the lumped mass and the
+// loads (Matrix Market). Sweep runs the statics, the mount stiffness at
+// every mount and, if asked, buckling and the lowest natural frequencies
+// (SweepSettings.Modes) at the Low, Nominal and High material levels with
+// one Solver and returns each governing number as a Spread: its value per
+// level and its min–max range (not assumed monotone in E).
 //
 // # Members and buckling
 //
@@ -121,7 +120,8 @@
 // within a margin of an excitation band (20 % by default, common
 // practice). Mode shapes are scaled to unit modal mass (φᵀ·M·φ = 1), and
 // modal quantities (participation, effective mass, receptance) use that
-// scaling.
+// scaling. Sweep gives the lowest frequencies per material level
+// (SweepSettings.Modes).
 //
 // # Errors
 //

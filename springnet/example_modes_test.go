@@ -120,3 +120,21 @@ func ExampleCheckExcitation() {
 	// mode 6 (100.3 Hz) near spindle, 2-flute cutter ×1: 50–100 Hz
 	// mode 6 (100.3 Hz) near spindle, 2-flute cutter ×2: 100–200 Hz
 }
+
+// The first natural frequencies of the stand with its machine as ranges
+// over the material uncertainty (the pads' stiffness spread and the
+// steel's E), one modal analysis per level.
+func ExampleSweep_frequencies() {
+	m, spindle := standWithMachine()
+	m.AddLoad(spindle, springnet.Load{FX: 500}) // a cutting force (demo data)
+	res, err := springnet.Sweep(m, &springnet.SweepSettings{Modes: 2})
+	if err != nil {
+		log.Fatal(err)
+	}
+	for i, f := range res.Frequencies {
+		fmt.Printf("mode %d: %.4g – %.4g – %.4g Hz\n", i+1, f.Range.Low, f.Range.Nominal, f.Range.High)
+	}
+	// Output:
+	// mode 1: 11.59 – 11.8 – 11.83 Hz
+	// mode 2: 12.57 – 12.83 – 12.86 Hz
+}
