@@ -33,9 +33,12 @@
 // and its children's update matrices, partially factorised with blocked
 // dense kernels (a packed matrix multiply with an AVX2/FMA register tile
 // on amd64, plain Go elsewhere or with the purego build tag), and its
-// Schur complement passed to the parent. Large multiplies are shared
-// between goroutines up to GOMAXPROCS. Refactorisation reuses all the
-// storage of the analysis.
+// Schur complement passed to the parent. With GOMAXPROCS > 1 and enough
+// work, independent subtrees are factorised concurrently and the large
+// multiplies near the root are shared between goroutines (run with
+// GOMAXPROCS=1 for a single thread). Refactorisation reuses all the
+// storage of the first factorisation. Solve, SolveMany and SolveBlock use
+// a workspace inside the Factor: one goroutine at a time.
 //
 // # Errors
 //

@@ -71,7 +71,7 @@ func (e *PivotError) Error() string {
 // L·D·Lᵀ. The zero Factor is ready for Analyze. A Factor keeps its ordering
 // and symbolic analysis, so Factorize may be called again with a matrix of
 // the same pattern and new values without a new Analyze; it then reuses
-// all its storage and allocates nothing.
+// all its storage (the first Factorize after an Analyze allocates it).
 //
 // The numeric factorisation is multifrontal over relaxed supernodes, with
 // dense blocked kernels (see doc.go). A Factor is not safe for concurrent
@@ -237,7 +237,6 @@ func (f *Factor) analyzePerm(a *Matrix, perm0 []int) error {
 	f.srow = f.srow[:0]
 	for s := 0; s < ns; s++ {
 		c0, c1 := f.sfirst[s], f.sfirst[s+1]
-		start := len(f.srow)
 		for j := c0; j < c1; j++ {
 			f.srow = append(f.srow, j)
 			mark[j] = s
@@ -262,7 +261,6 @@ func (f *Factor) analyzePerm(a *Matrix, perm0 []int) error {
 		}
 		sortInts(f.srow[tail:])
 		f.sptr[s+1] = len(f.srow)
-		_ = start
 	}
 
 	// Storage of L, relative indices, front offsets.
