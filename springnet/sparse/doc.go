@@ -23,9 +23,9 @@
 //
 // Analyze computes a fill-reducing ordering P (Options.Ordering):
 // approximate minimum degree (Amestoy, Davis and Duff 1996), nested
-// dissection (recursive coordinate bisection with boundary-layer vertex
-// separators when Options.Coords gives a point per row, breadth-first
-// level-structure separators otherwise), or Auto, which uses minimum
+// dissection (recursive coordinate bisection when Options.Coords gives a
+// point per row, multilevel graph bisection otherwise; each vertex
+// separator is a minimum cover of the cut edges), or Auto, which uses minimum
 // degree below 3000 rows and otherwise the one of the two with the
 // smaller factor. It then builds the postordered elimination tree, the
 // column counts (Gilbert, Ng and Peyton 1994) and relaxed supernodes.
