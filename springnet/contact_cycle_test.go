@@ -2,10 +2,12 @@ package springnet_test
 
 import (
 	"errors"
+	"fmt"
 	"math"
 	"math/rand/v2"
 	"os"
 	"sort"
+	"strings"
 	"testing"
 
 	"github.com/stretchr/testify/assert"
@@ -149,8 +151,48 @@ func TestContactCycleBench(t *testing.T) {
 	assert.True(t, checkDeterminate(t, f.Model, cr))
 	// A pushed bench can tip: the margin is found and above 1.
 	tip := cr.Tipping()
-	assert.True(t, tip.Found, tip.Note)
+	require.True(t, tip.Found, tip.Note)
 	assert.Greater(t, tip.Factor, 1.0)
+}
+
+// benchAt reads the bench of testdata with the planing force scaled to
+// lam × [120, 0, −40] lbf.
+func benchAt(t *testing.T, lam float64) *modelfile.File {
+	t.Helper()
+	data, err := os.ReadFile("testdata/bench-planing-120lbf.toml")
+	require.NoError(t, err)
+	const force = "force = [120, 0, -40]"
+	require.Contains(t, string(data), force)
+	text := strings.Replace(string(data), force, fmt.Sprintf("force = [%.17g, 0, %.17g]", 120*lam, -40*lam), 1)
+	f, err := modelfile.Read("bench", strings.NewReader(text))
+	require.NoError(t, err)
+	return f
+}
+
+func TestContactBenchTippingFactor(t *testing.T) {
+	// The tipping factor the contact path finds, checked by direct
+	// solves with the force scaled just below and just above it: below,
+	// the bench stands (complementarity and equilibrium hold); above, it
+	// tips. The margin is far above the path's round-off and far below
+	// the factor's size.
+	const margin = 0.01
+	for _, force := range []float64{1, 100.0 / 120} { // 120 lbf and the example's 100 lbf
+		f := benchAt(t, force)
+		res, err := springnet.Static(f.Model, nil)
+		require.NoError(t, err)
+		c := f.CaseIDs["planing"]
+		tip := res.Case(c).Tipping()
+		require.True(t, tip.Found, tip.Note)
+
+		below := benchAt(t, force*tip.Factor*(1-margin))
+		rb, err := springnet.Static(below.Model, nil)
+		require.NoError(t, err, "at %g × the force", tip.Factor*(1-margin))
+		checkContact(t, below.Model, rb.Case(c))
+
+		_, err = springnet.Static(benchAt(t, force*tip.Factor*(1+margin)).Model, nil)
+		var te *springnet.TippingError
+		assert.True(t, errors.As(err, &te), "at %g × the force: %v", tip.Factor*(1+margin), err)
+	}
 }
 
 // looseStand is a rigid stand on n loose feet spread round an ellipse of
