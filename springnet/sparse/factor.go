@@ -124,6 +124,7 @@ type Factor struct {
 	gw          gemmPool
 	y           []float64
 	xblk        []float64 // SolveMany workspace
+	tblk        []float64 // SolveMany workspace: a supernode's off-diagonal rows
 	tbuf        []float64 // Solve workspace: a supernode's off-diagonal rows
 	ok          bool
 	neg         int

@@ -1,6 +1,11 @@
 package sparse
 
-import "fmt"
+import (
+	"fmt"
+
+	"gonum.org/v1/gonum/blas"
+	"gonum.org/v1/gonum/blas/blas64"
+)
 
 // SolveMany solves A·x = b for several right-hand sides at once, reading
 // L once for all of them: dst[r] receives the solution for b[r]. Every
@@ -66,8 +71,16 @@ func (f *Factor) block(nr int) []float64 {
 	if len(f.xblk) < f.n*nr {
 		f.xblk = make([]float64, f.n*nr)
 	}
+	if len(f.tblk) < len(f.tbuf)*nr {
+		f.tblk = make([]float64, len(f.tbuf)*nr)
+	}
 	return f.xblk[:f.n*nr]
 }
+
+// blockBLAS is the supernode width from which solveBlock uses the gonum
+// BLAS level-3 kernels (triangular solve and multiply on the block of
+// right-hand sides) rather than plain loops.
+const blockBLAS = 8
 
 // solveBlock overwrites the row-major N×nr block x (pivot order) with
 // (L·D·Lᵀ)⁻¹·x.
@@ -78,6 +91,21 @@ func (f *Factor) solveBlock(x []float64, nr int) {
 		k := c1 - c0
 		rows := f.srow[f.sptr[s]:f.sptr[s+1]]
 		lx := f.lx[f.lptr[s]:f.lptr[s+1]]
+		if k >= blockBLAS && nr > 1 {
+			xs := blas64.General{Rows: k, Cols: nr, Stride: nr, Data: x[c0*nr : c1*nr]}
+			blas64.Trsm(blas.Left, blas.NoTrans, 1, blas64.Triangular{Uplo: blas.Lower, Diag: blas.Unit, N: k, Stride: k, Data: lx[:k*k]}, xs)
+			if u := len(rows) - k; u > 0 {
+				t := f.tblk[:u*nr]
+				blas64.Gemm(blas.NoTrans, blas.NoTrans, 1, blas64.General{Rows: u, Cols: k, Stride: k, Data: lx[k*k:]}, xs, 0, blas64.General{Rows: u, Cols: nr, Stride: nr, Data: t})
+				for i, r := range rows[k:] {
+					xi := row(r)
+					for q, v := range t[i*nr : (i+1)*nr] {
+						xi[q] -= v
+					}
+				}
+			}
+			continue
+		}
 		for i := 1; i < len(rows); i++ {
 			li := lx[i*k : i*k+min(i, k)]
 			xi := row(rows[i])
@@ -103,6 +131,18 @@ func (f *Factor) solveBlock(x []float64, nr int) {
 		k := c1 - c0
 		rows := f.srow[f.sptr[s]:f.sptr[s+1]]
 		lx := f.lx[f.lptr[s]:f.lptr[s+1]]
+		if k >= blockBLAS && nr > 1 {
+			xs := blas64.General{Rows: k, Cols: nr, Stride: nr, Data: x[c0*nr : c1*nr]}
+			if u := len(rows) - k; u > 0 {
+				t := f.tblk[:u*nr]
+				for i, r := range rows[k:] {
+					copy(t[i*nr:(i+1)*nr], row(r))
+				}
+				blas64.Gemm(blas.Trans, blas.NoTrans, -1, blas64.General{Rows: u, Cols: k, Stride: k, Data: lx[k*k:]}, blas64.General{Rows: u, Cols: nr, Stride: nr, Data: t}, 1, xs)
+			}
+			blas64.Trsm(blas.Left, blas.Trans, 1, blas64.Triangular{Uplo: blas.Lower, Diag: blas.Unit, N: k, Stride: k, Data: lx[:k*k]}, xs)
+			continue
+		}
 		for i := len(rows) - 1; i > 0; i-- {
 			li := lx[i*k : i*k+min(i, k)]
 			xi := row(rows[i])
