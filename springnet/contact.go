@@ -117,7 +117,7 @@ func (s *Solver) settle(nt *net, u, f []float64, co []int, tol float64, name str
 		}
 		seen[key] = len(flips)
 		if err := s.factor(nt); err != nil {
-			return 0, nil, nt.tipOrMechanism(err, name, co)
+			return 0, nil, s.tipOrMechanism(nt, err, name, co)
 		}
 		residual := s.solve(u, f)
 		worst, worstR := -1, -tol
@@ -179,7 +179,7 @@ func (nt *net) footFZ(i int, u []float64) float64 {
 // when the free node is the node of a lifted foot (a pin-jointed leg whose
 // foot left the floor swings freely: that is no tipping, but the model
 // cannot say what the leg does).
-func (nt *net) tipOrMechanism(err error, name string, co []int) error {
+func (s *Solver) tipOrMechanism(nt *net, err error, name string, co []int) error {
 	var lifted []string
 	for _, i := range co {
 		if !nt.el[i].active {
@@ -194,12 +194,41 @@ func (nt *net) tipOrMechanism(err error, name string, co []int) error {
 	if len(lifted) == 0 {
 		return me
 	}
-	if f := nt.liftedFootAt(me.Node, co); f != "" {
+	if f := s.hangsFree(nt, me.Node, co); f != "" {
 		me.Motion = fmt.Sprintf("foot %q lifted off and its node hangs free (a pin-jointed leg); "+
 			"make the leg a beam, brace the foot, or bolt it down", f)
 		return me
 	}
 	return &TippingError{Case: name, Lifted: lifted}
+}
+
+// hangsFree tells a lifted foot whose node hangs free from a stand that
+// tips, after a factorisation failed at node n: it returns the name of the
+// lifted foot at n if the failure is that node's (a pin-jointed leg), else
+// "". Where the factorisation meets a tipping stand's free motion depends
+// on the ordering, so the node alone does not tell: with every lifted foot
+// held sideways (see contact) a hanging node is held, while a stand that
+// tips about feet on the floor still moves freely (turning about a line
+// on the floor moves the floor's points vertically, to first order). It
+// refactorises with the held feet and restores their state.
+func (s *Solver) hangsFree(nt *net, n NodeID, co []int) string {
+	f := nt.liftedFootAt(n, co)
+	if f == "" {
+		return ""
+	}
+	was := make([]bool, len(co))
+	for j, i := range co {
+		was[j] = nt.el[i].held
+		nt.el[i].held = true
+	}
+	err := s.factor(nt)
+	for j, i := range co {
+		nt.el[i].held = was[j]
+	}
+	if err != nil {
+		return "" // still free with the feet held: the stand tips
+	}
+	return f
 }
 
 // liftedFootAt returns the name of a lifted compression-only foot at node
@@ -234,7 +263,7 @@ func (s *Solver) tipping(nt *net, fg, fv []float64, co []int, tol float64) (Tipp
 		if err := s.factor(nt); err != nil {
 			var me *MechanismError
 			if errors.As(err, &me) && last != "" {
-				if f := nt.liftedFootAt(me.Node, co); f != "" {
+				if f := s.hangsFree(nt, me.Node, co); f != "" {
 					return Tipping{Note: fmt.Sprintf("the contact path stopped at %.4g × the loads: "+
 						"foot %q lifted off and its node hangs free (a pin-jointed leg)", lam, f)}, nil
 				}

@@ -14,6 +14,7 @@ import (
 	"github.com/stretchr/testify/require"
 	"gonum.org/v1/gonum/mat"
 
+	"github.com/trestle-go/trestle/sections"
 	"github.com/trestle-go/trestle/springnet"
 	"github.com/trestle-go/trestle/springnet/modelfile"
 )
@@ -195,17 +196,27 @@ func TestContactBenchTippingFactor(t *testing.T) {
 	}
 }
 
-// looseStand is a rigid stand on n loose feet spread round an ellipse of
-// semi-axes a × b on the floor (a convex polygon), its weight w at cg and
-// a load p at q, one case with gravity.
-func looseStand(pts []springnet.Vec, w float64, cg springnet.Vec, q springnet.Vec, p springnet.Load) *springnet.Model {
+// looseStand is a stand on n loose feet at pts on the floor (a convex
+// polygon), its weight w at cg and a load p at q, one case with gravity.
+// Without legs it is one rigid body through its feet; with legs each foot
+// carries a weightless steel tube leg (a beam, up to legH) whose top is part
+// of the rigid top, so the stand is flexible.
+func looseStand(pts []springnet.Vec, legs bool, w float64, cg springnet.Vec, q springnet.Vec, p springnet.Load) *springnet.Model {
+	const legH = 0.6
+	steel := beamSteel()
+	steel.Density = 0 // weightless legs: the weight is w alone
 	var m springnet.Model
 	var nodes []springnet.NodeID
 	for i, at := range pts {
 		n := m.AddNode(string(rune('A'+i)), at)
-		nodes = append(nodes, n)
 		m.AddFoot(n, springnet.Foot{Name: "foot " + string(rune('A'+i)),
 			K: springnet.Stiffness6{X: 2e6, Y: 3e6, Z: 1e7 * (1 + float64(i%3))}, CompressionOnly: true})
+		if legs {
+			top := m.AddNode("", springnet.Vec{X: at.X, Y: at.Y, Z: legH})
+			m.AddBeam(n, top, springnet.Beam{Material: steel, Section: sections.RoundTube{D: 0.04, T: 0.003}})
+			n = top
+		}
+		nodes = append(nodes, n)
 	}
 	g := m.AddRigidGroup("stand", nodes...)
 	c := m.AddLoadCase("random")
@@ -263,15 +274,28 @@ func firstRoot(f func(float64) float64, lo, hi float64) (float64, bool) {
 }
 
 func TestContactRandomStands(t *testing.T) {
-	// Reference: a rigid body on loose feet stands iff the centre of
-	// pressure of the applied loads — where their resultant meets the
-	// floor, x = M_y/(−F_z), y = M_x/F_z for moments about the origin — lies
-	// in the convex hull of the feet (rigid-body statics; any mechanics
-	// text). Samples within a small band of the edge are skipped.
-	const samples = 200
+	// Reference: a body on loose feet stands iff the centre of pressure of
+	// the applied loads — where their resultant meets the floor,
+	// x = M_y/(−F_z), y = M_x/F_z for moments about the origin — lies in
+	// the convex hull of the feet (rigid-body statics of the whole stand,
+	// any mechanics text: the reactions are vertical forces ≥ 0 at the feet
+	// and sideways forces at floor level). In linear theory this holds for
+	// a flexible stand too. Samples within a small band of the edge are
+	// skipped.
+	for _, legs := range []bool{false, true} {
+		name := "rigid"
+		if legs {
+			name = "legs"
+		}
+		t.Run(name, func(t *testing.T) { randomStands(t, legs) })
+	}
+}
+
+func randomStands(t *testing.T, legs bool) {
+	const samples = 150
 	const edgeBand = 1e-4 // [m] of a ~0.5 m base: far above round-off
 	rng := rand.New(rand.NewPCG(1, 1))
-	stood, tipped, determinate, tips := 0, 0, 0, 0
+	stood, tipped, determinate, tips, held := 0, 0, 0, 0, 0
 	for s := 0; s < samples; s++ {
 		n := 4 + rng.IntN(3)
 		a, b := 0.3+0.4*rng.Float64(), 0.3+0.4*rng.Float64()
@@ -289,7 +313,7 @@ func TestContactRandomStands(t *testing.T) {
 		cg := springnet.Vec{X: 0.2 * a * (2*rng.Float64() - 1), Y: 0.2 * b * (2*rng.Float64() - 1), Z: 0.3 + rng.Float64()}
 		q := springnet.Vec{X: a * (2*rng.Float64() - 1), Y: b * (2*rng.Float64() - 1), Z: 1.5 * rng.Float64()}
 		p := springnet.Load{FX: 0.6 * w * (2*rng.Float64() - 1), FY: 0.6 * w * (2*rng.Float64() - 1), FZ: -w * rng.Float64()}
-		m := looseStand(pts, w, cg, q, p)
+		m := looseStand(pts, legs, w, cg, q, p)
 
 		// Resultant and moment about the origin, by hand.
 		fz := -w + p.FZ
@@ -309,6 +333,11 @@ func TestContactRandomStands(t *testing.T) {
 		require.NoError(t, err, "sample %d: centre of pressure %.3g m inside", s, margin)
 		cr := res.Case(0)
 		checkContact(t, m, cr)
+		for _, fr := range cr.Feet() {
+			if fr.Held {
+				held++
+			}
+		}
 		eq := cr.Equilibrium()
 		assert.InEpsilon(t, -fz, eq.Reactions.FZ, staticsTol, "sample %d", s)
 		if checkDeterminate(t, m, cr) {
@@ -339,5 +368,5 @@ func TestContactRandomStands(t *testing.T) {
 	assert.Greater(t, tipped, samples/10)
 	assert.Greater(t, determinate, samples/20)
 	assert.Greater(t, tips, samples/10)
-	t.Logf("%d stood (%d on three feet, %d tipping factors checked), %d tipped", stood, determinate, tips, tipped)
+	t.Logf("%d stood (%d on three feet, %d tipping factors checked, %d feet held), %d tipped", stood, determinate, tips, held, tipped)
 }
