@@ -8,7 +8,7 @@ import (
 )
 
 // Params are the lattice's spacing and bar properties. The zero value of a
-// field means its default (Default).
+// field means its default (DefaultParams).
 type Params struct {
 	H   float64 // grid spacing [m]
 	E   float64 // Young's modulus of the bars [Pa]
@@ -16,9 +16,9 @@ type Params struct {
 	Rho float64 // density of the bars [kg/m³]
 }
 
-// Default holds the benchmark's parameters: h = 0.1 m, E = 200 GPa,
-// A = 1e-4 m², ρ = 7850 kg/m³.
-var Default = Params{H: 0.1, E: 200e9, A: 1e-4, Rho: 7850}
+// DefaultParams returns the benchmark's parameters: h = 0.1 m,
+// E = 200 GPa, A = 1e-4 m², ρ = 7850 kg/m³.
+func DefaultParams() Params { return Params{H: 0.1, E: 200e9, A: 1e-4, Rho: 7850} }
 
 // Lattice is a generated space-truss lattice reduced to its free degrees
 // of freedom.
@@ -38,7 +38,8 @@ type Lattice struct {
 // N returns the number of free DOF, 3·(nx+1)·(ny+1)·nz.
 func (l *Lattice) N() int { return len(l.Mass) }
 
-// New generates the nx×ny×nz lattice with parameters p (nil for Default).
+// New generates the nx×ny×nz lattice with parameters p (nil for
+// DefaultParams).
 // Every value is computed in the order given by the definition, each
 // operation rounded on its own, so K, Mass and Load are bit-identical to
 // any other faithful implementation. It fails if a size is below 1 or a
@@ -47,7 +48,7 @@ func New(nx, ny, nz int, p *Params) (*Lattice, error) {
 	if nx < 1 || ny < 1 || nz < 1 {
 		return nil, fmt.Errorf("lattice: size %d×%d×%d: every count must be at least 1", nx, ny, nz)
 	}
-	prm := Default
+	prm := DefaultParams()
 	if p != nil {
 		for _, f := range []struct {
 			v   float64
