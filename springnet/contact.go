@@ -24,10 +24,12 @@ const contactTol = 1e-9
 // within the cycle are held (FootResult.Held): lifted vertically but
 // still held sideways by their horizontal and rotational springs, the
 // limit of a foot at the point of lifting whose friction still holds.
-// With every cycling foot held the vertical contact is a linear
-// complementarity problem with a symmetric positive definite matrix, for
-// which the least-index rule terminates (Murty 1988, from memory), so the
-// holding ends.
+// Holding only grows (at worst every foot is held), and with every foot
+// held only vertical springs come and go: the contact is then a linear
+// complementarity problem with a symmetric positive definite matrix (the
+// stand's flexibility at the feet), for which the least-index rule
+// terminates (Murty, Linear Complementarity, Linear and Nonlinear
+// Programming, 1988, from memory). So the search ends.
 func (s *Solver) contact(nt *net, c CaseID, cl *caseLoads, co []int) (*CaseResult, error) {
 	for _, i := range co {
 		nt.el[i].active = true

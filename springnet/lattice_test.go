@@ -20,7 +20,7 @@ import (
 // are added layer by layer, x fastest, so the free equations come out in
 // the lattice package's order.
 func latticeModel(nx, ny, nz int) *springnet.Model {
-	p := lattice.Default
+	p := lattice.DefaultParams()
 	var m springnet.Model
 	id := func(i, j, k int) springnet.NodeID { return springnet.NodeID(i + (nx+1)*(j+(ny+1)*k)) }
 	for k := 0; k <= nz; k++ {
