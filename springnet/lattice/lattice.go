@@ -20,6 +20,10 @@ type Params struct {
 // E = 200 GPa, A = 1e-4 m², ρ = 7850 kg/m³.
 func DefaultParams() Params { return Params{H: 0.1, E: 200e9, A: 1e-4, Rho: 7850} }
 
+// Default holds DefaultParams() for reading (springnet's lattice test uses
+// it); New never reads it, so changing it has no effect on the lattice.
+var Default = DefaultParams()
+
 // Lattice is a generated space-truss lattice reduced to its free degrees
 // of freedom.
 type Lattice struct {
