@@ -370,3 +370,18 @@ func randomStands(t *testing.T, legs bool) {
 	assert.Greater(t, tips, samples/10)
 	t.Logf("%d stood (%d on three feet, %d tipping factors checked, %d feet held), %d tipped", stood, determinate, tips, held, tipped)
 }
+
+// BenchmarkContactBench times the static analysis of the bench whose
+// contact search used to cycle (four cases, one with a held pad, with the
+// tipping path).
+func BenchmarkContactBench(b *testing.B) {
+	data, err := os.ReadFile("testdata/bench-planing-120lbf.toml")
+	require.NoError(b, err)
+	f, err := modelfile.Read("bench", strings.NewReader(string(data)))
+	require.NoError(b, err)
+	for b.Loop() {
+		if _, err := springnet.Static(f.Model, nil); err != nil {
+			b.Fatal(err)
+		}
+	}
+}
