@@ -1,11 +1,13 @@
 package main
 
 import (
+	"errors"
 	"fmt"
 	"io"
 	"math"
 
 	"github.com/trestle-go/trestle/materials"
+	"github.com/trestle-go/trestle/springnet"
 )
 
 // governingRow is one governing number across columns (levels or models).
@@ -83,20 +85,136 @@ factor, displacement. Design to the worse end.`,
 	if err != nil {
 		return err
 	}
-	rep := RangesReport{Schema: schemaRanges, Model: name, Cautions: cautions,
-		Pending: append([]string(nil), pendingAnalyses...)}
-	for _, l := range materials.Levels {
-		a, err := analyse(m, name, l, dyn)
-		if err != nil {
-			return fmt.Errorf("at %s material values: %w", l, err)
-		}
-		rep.Levels = append(rep.Levels, LevelReport{Level: l.String(), Governing: a.report.Governing, Mounts: a.report.Mounts})
+	rep, err := ranges(m, name, dyn)
+	if err != nil {
+		return err
 	}
 	if of.json {
 		return writeJSON(e.stdout, rep)
 	}
-	writeRanges(e.stdout, rep, u)
+	writeRanges(e.stdout, *rep, u)
 	return nil
+}
+
+// ranges sweeps m over the material levels with one reused Solver
+// (springnet.Sweep: the symbolic analysis of K is done once, each level
+// only refactorises) and builds the report: per level the governing
+// numbers, with the names of the governing mount, member, node and case
+// taken from the level's static results, and the mount stiffness.
+func ranges(m *springnet.Model, name string, dyn dynamics) (*RangesReport, error) {
+	rep := &RangesReport{Schema: schemaRanges, Model: name, Warnings: []string{}, Cautions: cautions,
+		Pending: append([]string(nil), pendingAnalyses...)}
+	count := dyn.count
+	if count == 0 {
+		count = springnet.DefaultModeCount
+	}
+	var s springnet.Solver
+	// Buckling is run here per case rather than by Sweep, which gives
+	// the lowest factor but not the case that has it.
+	st := &springnet.SweepSettings{Places: mountPlaces(m), Modes: count}
+	res, err := s.Sweep(m, st)
+	// Sweep fails as a whole where the full analysis only warns: at a
+	// place with no stiffness (held rigidly, or offset from a pinned
+	// node) or when there are no natural modes (no mass). Find the part
+	// that failed, drop it with a warning and sweep again; each retry
+	// drops a place or the modes, so this ends.
+	var cond *springnet.ConditionError
+	for err != nil && !(errors.As(err, &cond) && res != nil) {
+		if i, perr := placeWithoutStiffness(&s, m, st.Places); i >= 0 {
+			rep.Warnings = append(rep.Warnings, fmt.Sprintf("no stiffness at %s: %v", placeName(m, st.Places[i]), perr))
+			st.Places = append(st.Places[:i:i], st.Places[i+1:]...)
+		} else if st.Modes > 0 {
+			if _, merr := springnet.Modes(m, &springnet.ModeSettings{Count: st.Modes}); merr == nil {
+				return nil, explain(name, err)
+			}
+			rep.Warnings = append(rep.Warnings, "no natural frequencies: "+err.Error())
+			st.Modes = 0
+		} else {
+			return nil, explain(name, err)
+		}
+		res, err = s.Sweep(m, st)
+	}
+	if err != nil {
+		rep.Warnings = append(rep.Warnings, "suspect solve: "+err.Error())
+	}
+	for li, l := range materials.Levels {
+		lr := LevelReport{Level: l.String(), Mounts: []MountStiffness{}}
+		part := &AnalysisReport{}
+		for pi, p := range st.Places {
+			mr := mountReport(res.Mounts[pi].Points[li])
+			mr.Name = placeName(m, p)
+			lr.Mounts = append(lr.Mounts, mr)
+		}
+		part.Mounts = lr.Mounts
+		sr := res.Static[li]
+		for c := 0; c < sr.NumCases(); c++ {
+			part.Cases = append(part.Cases, caseReport(m, sr.Case(springnet.CaseID(c))))
+		}
+		if part.Buckling, err = lowestBuckling(&s, m, l); err != nil {
+			rep.Warnings = append(rep.Warnings, err.Error())
+		}
+		lr.Governing = governing(part)
+		if mr := res.ModeResults[li]; mr != nil {
+			for i := 0; i < mr.NumModes(); i++ {
+				if !mr.RigidBody(i) {
+					f := mr.Frequency(i)
+					lr.Governing.FirstFrequencyHz = &f
+					break
+				}
+			}
+		}
+		rep.Levels = append(rep.Levels, lr)
+	}
+	return rep, nil
+}
+
+// lowestBuckling returns the lowest positive whole-stand buckling factor
+// of m at level l as a one-entry report naming its case (none when no
+// case has one), solving with s. A case in which nothing is in
+// compression has no factor; a case whose buckling analysis fails is
+// skipped and named in the error.
+func lowestBuckling(s *springnet.Solver, m *springnet.Model, l materials.Level) ([]BucklingReport, error) {
+	var out []BucklingReport
+	var errs []error
+	for c := 0; c < m.NumCases(); c++ {
+		id := springnet.CaseID(c)
+		br, err := s.Buckling(m, id, &springnet.BucklingSettings{Modes: 1, Level: l})
+		var few *springnet.FewerFactorsError
+		var cond *springnet.ConditionError
+		switch {
+		case errors.As(err, &few) && br == nil:
+			continue // nothing in compression under this case
+		case errors.As(err, &cond) && br != nil:
+			errs = append(errs, fmt.Errorf("suspect buckling solve at %s material values: %v", l, err))
+		case err != nil && !errors.As(err, &few):
+			errs = append(errs, fmt.Errorf("buckling of case %q at %s material values: %v", m.CaseName(id), l, err))
+			continue
+		}
+		if br.NumModes() > 0 && (out == nil || br.Factor(0) < out[0].Factors[0]) {
+			out = []BucklingReport{{Case: m.CaseName(id), Factors: []float64{br.Factor(0)}}}
+		}
+	}
+	return out, errors.Join(errs...)
+}
+
+// placeWithoutStiffness returns the index of the first of places at which
+// the stiffness cannot be found, and why, or −1 when every place has one
+// (the failure is elsewhere). A model that cannot be solved at all is
+// not blamed on a place.
+func placeWithoutStiffness(s *springnet.Solver, m *springnet.Model, places []springnet.Place) (int, error) {
+	var cond *springnet.ConditionError
+	for i, p := range places {
+		ps, err := s.MountStiffness(m, p, nil)
+		if err == nil || errors.As(err, &cond) && ps != nil {
+			continue
+		}
+		var mech *springnet.MechanismError
+		if errors.As(err, &mech) || m.Validate() != nil {
+			return -1, nil
+		}
+		return i, err
+	}
+	return -1, nil
 }
 
 // spread returns (max − min)/nominal of the non-nil values, and whether
@@ -119,6 +237,12 @@ func spread(vals []*float64, nominal int) (float64, bool) {
 func writeRanges(w io.Writer, r RangesReport, u unitSystem) {
 	fmt.Fprintf(w, "trestle ranges: %s\n", r.Model)
 	fmt.Fprintf(w, "Every material and spring at the low, nominal and high end of its range.\n")
+	if len(r.Warnings) > 0 {
+		heading(w, "WARNINGS")
+		for _, x := range r.Warnings {
+			fmt.Fprintf(w, "  ! %s\n", x)
+		}
+	}
 	gs := make([]Governing, len(r.Levels))
 	for i, l := range r.Levels {
 		gs[i] = l.Governing

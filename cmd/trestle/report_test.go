@@ -353,3 +353,37 @@ func demoStructure(t *testing.T, model string) {
 		assert.Less(t, strings.Index(out, "LIFTED FEET"), strings.Index(out, "GOVERNING NUMBERS"))
 	}
 }
+
+// TestRangesRigidMount: a mount on a support fixed in every direction has
+// no stiffness (it is infinite); ranges names it in a warning and still
+// reports the other mount, whose sway stiffness is 4·12·E·I/L³ as in
+// TestRangesHandCheck (Roark's Formulas for Stress and Strain, Table 8.1,
+// case 1e).
+func TestRangesRigidMount(t *testing.T) {
+	const (
+		d, L = 0.030, 0.7
+		eNom = 210e9 // steel S235 nominal E in the materials catalogue
+		tol  = 1e-9  // the same solve as TestRangesHandCheck
+	)
+	data, err := os.ReadFile("testdata/steel-legs.toml")
+	require.NoError(t, err)
+	model := string(data) + "\n[[mount]]\nname = \"floor-pad\"\non = \"A1\"\nat = [0, 0, 0]\n"
+	r := trestle(t, model, "ranges", "--json", "-")
+	require.NoError(t, r.err)
+	var rep RangesReport
+	decodeStrict(t, r.stdout, &rep)
+	require.Len(t, rep.Warnings, 1)
+	assert.Contains(t, rep.Warnings[0], "no stiffness at floor-pad")
+	assert.Contains(t, rep.Warnings[0], "held rigidly")
+	require.Len(t, rep.Levels, 3)
+	for _, l := range rep.Levels {
+		require.Len(t, l.Mounts, 1, l.Level)
+		assert.Equal(t, "seat", l.Mounts[0].Name)
+	}
+	i := math.Pi * math.Pow(d, 4) / 64
+	assert.InEpsilon(t, 4*12*eNom*i/(L*L*L), rep.Levels[1].Governing.SoftestStiffnessNPerM, tol)
+	text := trestle(t, model, "ranges", "-")
+	require.NoError(t, text.err)
+	assert.Contains(t, text.stdout, "WARNINGS")
+	assert.Contains(t, text.stdout, "no stiffness at floor-pad")
+}

@@ -220,7 +220,8 @@ type ResonanceReport struct {
 type RangesReport struct {
 	Schema   string        `json:"schema"`
 	Model    string        `json:"model"`
-	Levels   []LevelReport `json:"levels"` // low, nominal, high
+	Levels   []LevelReport `json:"levels"`   // low, nominal, high
+	Warnings []string      `json:"warnings"` // places without stiffness, no modes, suspect solves
 	Pending  []string      `json:"pending"`
 	Cautions []string      `json:"cautions"`
 }
