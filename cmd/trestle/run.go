@@ -8,6 +8,8 @@ import (
 	"sort"
 	"strings"
 	"text/tabwriter"
+
+	"github.com/trestle-go/trestle/materials"
 )
 
 // env is what every command gets: its arguments after the command word and
@@ -103,7 +105,7 @@ Example:
 func suggestCommand(name string) string {
 	best, bestD := "", 3
 	for _, c := range commands() {
-		if d := editDistance(strings.ToLower(name), c.name); d < bestD {
+		if d := materials.EditDistance(strings.ToLower(name), c.name); d < bestD {
 			best, bestD = c.name, d
 		}
 	}
@@ -111,28 +113,6 @@ func suggestCommand(name string) string {
 		return ""
 	}
 	return fmt.Sprintf("; did you mean %q?", best)
-}
-
-// editDistance is the Levenshtein distance between a and b.
-func editDistance(a, b string) int {
-	ra, rb := []rune(a), []rune(b)
-	prev := make([]int, len(rb)+1)
-	cur := make([]int, len(rb)+1)
-	for j := range prev {
-		prev[j] = j
-	}
-	for i := 1; i <= len(ra); i++ {
-		cur[0] = i
-		for j := 1; j <= len(rb); j++ {
-			cost := 1
-			if ra[i-1] == rb[j-1] {
-				cost = 0
-			}
-			cur[j] = min(prev[j]+1, cur[j-1]+1, prev[j-1]+cost)
-		}
-		prev, cur = cur, prev
-	}
-	return prev[len(rb)]
 }
 
 // flags is a command's flag set with its help text.
