@@ -58,8 +58,12 @@ type Reaction struct {
 }
 
 // Reactions returns the reactions of every node and group with a fixed DOF,
-// nodes first in handle order, then groups. Feet are in Feet.
+// nodes first in handle order, then groups; nil in a tipped case. Feet
+// are in Feet.
 func (c *CaseResult) Reactions() []Reaction {
+	if c.Tipped() {
+		return nil
+	}
 	m := c.nt.m
 	var out []Reaction
 	for i := range m.nodes {
@@ -76,10 +80,16 @@ func (c *CaseResult) Reactions() []Reaction {
 }
 
 // ForcesTo writes the force state of every element, in handle order, into
-// dst (nil allocates) and returns it.
+// dst (nil allocates) and returns it; in a tipped case only Kind is set.
 func (c *CaseResult) ForcesTo(dst []ElementForce) []ElementForce {
 	if dst == nil {
-		dst = make([]ElementForce, len(c.forces))
+		dst = make([]ElementForce, len(c.nt.m.elems))
+	}
+	if c.Tipped() {
+		for i := range c.nt.m.elems {
+			dst[i] = ElementForce{Kind: c.nt.m.elems[i].kind}
+		}
+		return dst
 	}
 	copy(dst, c.forces)
 	return dst

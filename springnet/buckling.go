@@ -58,8 +58,9 @@ type BucklingResult struct {
 // solution and scale with λ (linear buckling: imperfections and
 // plasticity lower the real capacity).
 //
-// Errors: the static errors of case c (*MechanismError, *TippingError,
-// validation); a *FewerFactorsError, with no result, when no load factor
+// Errors: the static errors of case c (*MechanismError; a *TippingError,
+// with no result, when the stand tips under case c, whose buckling then
+// means nothing; validation — other cases are not solved); a *FewerFactorsError, with no result, when no load factor
 // is positive (nothing in compression can buckle: a tension-only
 // structure), or with the result when fewer than Modes exist. A static
 // solve whose residual exceeds MaxResidual gives the result with a

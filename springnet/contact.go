@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"math"
 	"slices"
+	"strings"
 )
 
 // contactTol is the relative size, against the total applied force, below
@@ -60,12 +61,47 @@ func (s *Solver) contact(nt *net, c CaseID, cl *caseLoads, co []int) (*CaseResul
 		}
 	}
 	cr := nt.recover(c, cl, u, residual)
-	tip, err := s.tipping(nt, fg, fv, co, tol)
+	tip, err := s.tipping(nt, fg, fv, co, tol, 1)
 	if err != nil {
 		return nil, err
 	}
 	cr.tip = tip
 	return cr, nil
+}
+
+// tippedCase builds the result of case c, under which the stand on the
+// compression-only feet co tips (te, from contact): no solution, the feet
+// lifted when the last stable set was lost (the state contact left), and
+// the factor λ ≤ 1 on the loads other than gravity at which it tips,
+// found by following the contact path from gravity alone (λ = 0, every
+// foot down) as Tipping does from λ = 1.
+func (s *Solver) tippedCase(nt *net, c CaseID, cl *caseLoads, co []int, te *TippingError) *CaseResult {
+	cr := &CaseResult{nt: nt, id: c, name: nt.m.cases[c].name, tipped: te}
+	for _, i := range co {
+		if !nt.el[i].active {
+			cr.lifted = append(cr.lifted, ElementID(i))
+		}
+		nt.el[i].active, nt.el[i].held = true, false
+	}
+	fg := nt.dm.eqVector(nil, cl.grav)
+	fv := nt.dm.eqVector(nil, cl.vari)
+	tol := contactTol * (loadMagnitude(cl.grav) + loadMagnitude(cl.vari))
+	note := fmt.Sprintf("the stand tips under the loads of case %q: no stable set of feet stays in contact (lifted: %s)",
+		cr.name, strings.Join(te.Lifted, ", "))
+	tip, err := s.tipping(nt, fg, fv, co, tol, 0)
+	switch {
+	case err == nil && tip.Found && tip.Factor <= 1:
+		tip.Note = fmt.Sprintf("%s; it tips at %.4g × the loads other than gravity", note, tip.Factor)
+	case isZero(fg):
+		// No weight holds it down: any other load tips it.
+		tip = Tipping{Factor: 0, Found: true, Note: note + "; nothing holds it down (no gravity), so any other load tips it"}
+	case isZero(fv):
+		tip = Tipping{Note: note + "; it tips under gravity alone (its centre of gravity is outside the feet)"}
+	default:
+		tip = Tipping{Note: note + "; the contact path from gravity alone did not find the factor at which it tips"}
+	}
+	cr.tip = tip
+	return cr
 }
 
 // hold marks the feet of cycle as held; if all of them already are, every
@@ -247,17 +283,17 @@ func (nt *net) liftedFootAt(n NodeID, co []int) string {
 	return ""
 }
 
-// tipping follows the contact path for loads fg + λ·fv from λ = 1 upward,
-// starting from the contact set the case settled on, until the stand can
-// move freely. Within a contact set the reactions are linear in λ, so each
+// tipping follows the contact path for loads fg + λ·fv from λ = lam0
+// upward, starting from the current contact set (the one the case settled
+// on, from 1; every foot down, from 0), until the stand can move freely. Within a contact set the reactions are linear in λ, so each
 // change of contact happens at a λ found in closed form.
-func (s *Solver) tipping(nt *net, fg, fv []float64, co []int, tol float64) (Tipping, error) {
+func (s *Solver) tipping(nt *net, fg, fv []float64, co []int, tol, lam0 float64) (Tipping, error) {
 	if isZero(fg) || isZero(fv) {
 		return Tipping{}, nil
 	}
 	n := len(fg)
 	ug, uv := make([]float64, n), make([]float64, n)
-	lam := 1.0
+	lam := lam0
 	last := ""
 	path := contactPath{seen: make(map[string]int)} // contact sets visited at this λ
 	maxEvents := 50*len(co) + 100

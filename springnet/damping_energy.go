@@ -335,8 +335,13 @@ func (t *energyTally) shares(bk *energyBook) []EnergyShare {
 // ElementID) and returns it [J]: ½·uₑᵀ·Kₑ·uₑ over each element's DOF,
 // the same function the modal damping uses. A lifted compression-only
 // foot has none. For a linear case the energies add up to half the work
-// of the loads.
+// of the loads. A tipped case (CaseResult.Tipped) gives zeros.
 func StrainEnergies(c *CaseResult, dst []float64) []float64 {
+	if c.Tipped() {
+		dst = sizedFloats(dst, len(c.nt.m.elems))
+		clear(dst)
+		return dst
+	}
 	defer c.contactState()()
 	return c.nt.strainEnergies(dst, c.u)
 }
@@ -373,8 +378,12 @@ func (c *CaseResult) contactState() func() {
 
 // MaterialEnergies returns the strain energy of the static solution of
 // case c per material (and for the springs, feet and raw members), the
-// largest first, with each group's loss factor range.
+// largest first, with each group's loss factor range; nil for a tipped
+// case (CaseResult.Tipped).
 func MaterialEnergies(c *CaseResult) []EnergyShare {
+	if c.Tipped() {
+		return nil
+	}
 	defer c.contactState()()
 	bk := newEnergyBook(c.nt)
 	return bk.tally(c.nt, c.u).shares(bk)

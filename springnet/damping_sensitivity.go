@@ -1,6 +1,8 @@
 package springnet
 
 import (
+	"errors"
+	"fmt"
 	"sort"
 
 	"github.com/trestle-go/trestle/materials"
@@ -36,7 +38,9 @@ type Sensitivity struct {
 // stored in material k (StrainEnergies, parts of composite sections split
 // as for modal damping). Gravity loads do not depend on E, so they stay
 // fixed. Compression-only feet keep the contact state of the solution.
-// Errors are those of Static.
+// Errors are those of Static for case c: a *TippingError (and no
+// result) if the stand tips under c; the tipping of other cases is no
+// error here.
 func ComplianceSensitivity(m *Model, c CaseID, l materials.Level) ([]Sensitivity, error) {
 	m.CaseName(c)
 	res, err := Static(m, &StaticSettings{Level: l})
@@ -44,6 +48,17 @@ func ComplianceSensitivity(m *Model, c CaseID, l materials.Level) ([]Sensitivity
 		return nil, err
 	}
 	cr := res.Case(c)
+	if cr.Tipped() {
+		return nil, cr.tipped
+	}
+	var tip *TippingError
+	if errors.As(err, &tip) {
+		// Another case tipped; only this case's solve matters.
+		err = nil
+		if cr.residual > MaxResidual {
+			err = &ConditionError{Case: fmt.Sprintf("case %q", cr.name), Residual: cr.residual}
+		}
+	}
 	defer cr.contactState()()
 	bk := newEnergyBook(cr.nt)
 	t := bk.tally(cr.nt, cr.u)

@@ -130,7 +130,15 @@
 // described where found, and the usual cure. A solve whose relative
 // residual exceeds MaxResidual returns its result with a *ConditionError.
 // A case under which a stand on compression-only feet has no stable
-// contact set is a *TippingError. No result holds NaN or Inf. Results
+// contact set tips: Static (and Sweep) still solve every other case and
+// return the result together with a *TippingError naming the case
+// (errors.Join of one per tipped case, or level in Sweep); the tipped
+// case's CaseResult reports Tipped, its lifted feet and the factor at
+// which it tips, and has no displacements or forces: its queries return
+// zero values, and member checks, Buckling and ComplianceSensitivity on
+// it return an error. A caller that goes on after a *TippingError must
+// check CaseResult.Tipped. Modes and mount stiffness take every foot in
+// contact and do not depend on a case. No result holds NaN or Inf. Results
 // about tipping and overload are model results: check them against local
 // codes and licensed engineering practice.
 package springnet

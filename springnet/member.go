@@ -163,12 +163,16 @@ func (r *StaticResult) MemberForces(e ElementID) (MemberResult, error) {
 // MemberCheck returns the results of bar or beam e in this case: end
 // forces, fibre stresses, utilisation and the Euler buckling check with
 // the effective-length factors chosen by s (nil: defaults). It returns an
-// error if e is a spring or a foot or s holds an invalid override; an
-// out-of-range handle panics.
+// error if e is a spring or a foot, s holds an invalid override, or the
+// stand tips under the case (CaseResult.Tipped); an out-of-range handle
+// panics.
 func (c *CaseResult) MemberCheck(e ElementID, s *MemberSettings) (MemberResult, error) {
 	x := c.nt.m.el(e)
 	if x.kind != BarKind && x.kind != BeamKind {
 		return MemberResult{}, fmt.Errorf("springnet: %v %q is not a bar or beam: no member results", x.kind, x.name())
+	}
+	if err := c.tippedErr("member forces"); err != nil {
+		return MemberResult{}, err
 	}
 	if err := s.check(c.nt.m); err != nil {
 		return MemberResult{}, err
@@ -177,9 +181,14 @@ func (c *CaseResult) MemberCheck(e ElementID, s *MemberSettings) (MemberResult, 
 }
 
 // MembersTo writes the results of every bar and beam, in element order,
-// into dst (nil allocates) and returns it.
+// into dst (nil allocates) and returns it. It returns an error if s holds
+// an invalid override or the stand tips under the case
+// (CaseResult.Tipped).
 func (c *CaseResult) MembersTo(dst []MemberResult, s *MemberSettings) ([]MemberResult, error) {
 	if err := s.check(c.nt.m); err != nil {
+		return dst[:0], err
+	}
+	if err := c.tippedErr("member forces"); err != nil {
 		return dst[:0], err
 	}
 	dst = dst[:0]

@@ -4,6 +4,7 @@ import (
 	"errors"
 	"fmt"
 	"math"
+	"strings"
 
 	"github.com/trestle-go/trestle/materials"
 	"github.com/trestle-go/trestle/springnet/element"
@@ -30,10 +31,23 @@ func Static(m *Model, st *StaticSettings) (*StaticResult, error) {
 // compression-only feet and the tipping margin.
 //
 // It returns a *MechanismError (and no result) if the model can move
-// freely, a *TippingError if a case leaves no stable set of
-// compression-only feet in contact, and the validation errors of an
-// invalid model. If a solve's relative residual exceeds MaxResidual it
-// returns the result together with a *ConditionError (the worst one).
+// freely with every foot down, and the validation errors of an invalid
+// model.
+//
+// A case under which a stand on compression-only feet has no stable set
+// of feet in contact tips: it gets a CaseResult marked Tipped (the feet
+// lifted when the last stable set was lost, the factor at which it tips,
+// no displacements or forces), the other cases are solved as usual, and
+// Static returns the result together with a *TippingError naming the
+// case, or errors.Join of one *TippingError per tipped case, in case
+// order (errors.As finds the first). Callers that only check err != nil
+// stay safe; callers that go on must check CaseResult.Tipped.
+//
+// If a solve's relative residual exceeds MaxResidual it returns the
+// result together with a *ConditionError (the worst one), unless a case
+// tipped: the tipping errors then stand alone, so that a caller that
+// accepts a result with a *ConditionError never takes a tipped case for
+// a solved one; CaseResult.Residual still tells.
 func (s *Solver) Static(m *Model, st *StaticSettings) (*StaticResult, error) {
 	if st == nil {
 		st = &StaticSettings{}
@@ -51,6 +65,7 @@ func (s *Solver) Static(m *Model, st *StaticSettings) (*StaticResult, error) {
 	res := &StaticResult{m: m, level: st.Level, nt: nt}
 	co := compressionOnlyFeet(m)
 	var worst *ConditionError
+	var tips []error
 	factored := false
 	for c := range m.cases {
 		cl, err := nt.buildLoads(CaseID(c))
@@ -58,6 +73,12 @@ func (s *Solver) Static(m *Model, st *StaticSettings) (*StaticResult, error) {
 			return nil, err
 		}
 		cr, err := s.solveCaseOn(nt, CaseID(c), cl, co, &factored)
+		var tip *TippingError
+		if errors.As(err, &tip) {
+			res.cases = append(res.cases, s.tippedCase(nt, CaseID(c), cl, co, tip))
+			tips = append(tips, tip)
+			continue
+		}
 		if err != nil {
 			return nil, err
 		}
@@ -69,7 +90,12 @@ func (s *Solver) Static(m *Model, st *StaticSettings) (*StaticResult, error) {
 		}
 		res.cases = append(res.cases, cr)
 	}
-	if worst != nil {
+	switch {
+	case len(tips) == 1:
+		return res, tips[0]
+	case len(tips) > 1:
+		return res, errors.Join(tips...)
+	case worst != nil:
 		return res, worst
 	}
 	return res, nil
@@ -141,7 +167,7 @@ func (r *StaticResult) Case(c CaseID) *CaseResult {
 }
 
 // Displacement returns the displacement of node n in DefaultCase (the
-// first case); use Case for the others.
+// first case; zero if it tipped); use Case for the others.
 func (r *StaticResult) Displacement(n NodeID) Displacement { return r.cases[0].Displacement(n) }
 
 // Residual returns the largest relative residual of all the solves.
@@ -220,7 +246,14 @@ type Equilibrium struct {
 // unloading ended it. Found is false when no factor tips the stand (no
 // gravity, no other load, or the feet never all unload), and Factor is
 // then 0. Model the machine's weight as a Mass so that it counts as
-// stabilising. A margin is a model result: check stability against local
+// stabilising.
+//
+// In a case that tips under its own loads (CaseResult.Tipped), Factor is
+// the factor λ ≤ 1 at which it tips, the contact path followed from
+// gravity alone (λ = 0, every foot down); it is 0 when no gravity holds
+// the stand down. Found is false if the path does not find it (a stand
+// that tips under gravity alone), and Note says that the stand tips in
+// either case. A margin is a model result: check stability against local
 // codes and licensed engineering practice.
 type Tipping struct {
 	Factor   float64
@@ -230,6 +263,15 @@ type Tipping struct {
 }
 
 // CaseResult holds the static results of one load case or combination.
+//
+// A case under which the stand tips (Tipped) has no solution: Lifted
+// gives the feet lifted when the last stable set of feet was lost and
+// Tipping the factor at which it tips and a note; every other query
+// returns zero values (Displacement, At, Differential, Force, Reaction,
+// Equilibrium, Residual, DisplacementsTo and ForcesTo write zeros; Feet,
+// Reactions and MaterialEnergies are empty, Foot reports ok false), and
+// MemberForces, MemberCheck, MembersTo, Buckling and
+// ComplianceSensitivity return an error. Nothing is NaN.
 type CaseResult struct {
 	nt       *net
 	id       CaseID
@@ -245,6 +287,26 @@ type CaseResult struct {
 	tip      Tipping
 	lifted   []ElementID
 	held     []ElementID // compression-only feet held sideways (FootResult.Held)
+	tipped   *TippingError // non-nil: the stand tips under this case; no solution
+}
+
+// Tipped reports whether the stand tips under this case: on
+// compression-only feet, no stable set of feet stays in contact. The case
+// then has no displacements or forces (see CaseResult); Lifted and
+// Tipping say which feet lifted and at what factor it tips. The stand
+// must be made stable (weight, a wider base, anchored feet) before the
+// case's results mean anything; check stability against local codes and
+// licensed engineering practice.
+func (c *CaseResult) Tipped() bool { return c.tipped != nil }
+
+// tippedErr returns the error of a query that needs the solution of a
+// tipped case, or nil if c was solved.
+func (c *CaseResult) tippedErr(what string) error {
+	if c.tipped == nil {
+		return nil
+	}
+	return fmt.Errorf("springnet: case %q: the stand tips (lifted: %s): no %s; make it stable first",
+		c.name, strings.Join(c.tipped.Lifted, ", "), what)
 }
 
 // Name returns the case's name.
@@ -253,20 +315,29 @@ func (c *CaseResult) Name() string { return c.name }
 // ID returns the case's handle.
 func (c *CaseResult) ID() CaseID { return c.id }
 
-// Residual returns the relative residual of the solve.
+// Residual returns the relative residual of the solve (0 for a tipped
+// case).
 func (c *CaseResult) Residual() float64 { return c.residual }
 
 // Displacement returns the displacement of node n [m, rad]; rotations that
-// do not exist at the node (bars only) are zero.
+// do not exist at the node (bars only) are zero, and so is all of it in a
+// tipped case.
 func (c *CaseResult) Displacement(n NodeID) Displacement {
 	c.nt.m.checkNode(n)
+	if c.Tipped() {
+		return Displacement{}
+	}
 	return dispOf(c.disp[n])
 }
 
 // At returns the motion of a place: a node, a group's reference point or
-// a mount point, moving rigidly with its node or group [m, rad].
+// a mount point, moving rigidly with its node or group [m, rad]; zero in
+// a tipped case.
 func (c *CaseResult) At(p Place) Displacement {
 	c.nt.m.checkPlace(p)
+	if c.Tipped() {
+		return Displacement{}
+	}
 	o, at := c.nt.dm.placeOwner(c.nt.m, p)
 	return dispOf(c.nt.dm.pointDisp(o, at, c.u))
 }
@@ -281,17 +352,26 @@ func (c *CaseResult) Differential(a, b Place) Displacement {
 	return dispOf(wb)
 }
 
-// Force returns the force state of element e.
+// Force returns the force state of element e; in a tipped case only Kind
+// is set.
 func (c *CaseResult) Force(e ElementID) ElementForce {
-	c.nt.m.el(e)
+	x := c.nt.m.el(e)
+	if c.Tipped() {
+		return ElementForce{Kind: x.kind}
+	}
 	return c.forces[e]
 }
 
 // Reaction returns the support reaction at a fixed node (NodeID) or a fixed
 // rigid group (GroupID, at its reference point): the force and moment the
 // support exerts on the stand, in the fixed directions only (zero
-// elsewhere). Feet are reported by Foot and Feet.
+// elsewhere; zero everywhere in a tipped case). Feet are reported by Foot
+// and Feet.
 func (c *CaseResult) Reaction(p Place) Load {
+	if c.Tipped() {
+		c.nt.m.checkPlace(p)
+		return Load{}
+	}
 	switch p := p.(type) {
 	case NodeID:
 		c.nt.m.checkNode(p)
@@ -306,9 +386,13 @@ func (c *CaseResult) Reaction(p Place) Load {
 	return Load{}
 }
 
-// Foot returns the state of foot e; ok is false if e is not a foot.
+// Foot returns the state of foot e; ok is false if e is not a foot or the
+// case tipped (see Lifted).
 func (c *CaseResult) Foot(e ElementID) (FootResult, bool) {
 	c.nt.m.el(e)
+	if c.Tipped() {
+		return FootResult{}, false
+	}
 	i := c.footIdx[e]
 	if i < 0 {
 		return FootResult{}, false
@@ -316,24 +400,33 @@ func (c *CaseResult) Foot(e ElementID) (FootResult, bool) {
 	return c.feet[i], true
 }
 
-// Feet returns the states of all feet in element order (a copy).
+// Feet returns the states of all feet in element order (a copy); nil in a
+// tipped case (see Lifted).
 func (c *CaseResult) Feet() []FootResult { return append([]FootResult(nil), c.feet...) }
 
-// Lifted returns the compression-only feet out of contact.
+// Lifted returns the compression-only feet out of contact. In a tipped
+// case, the feet that were lifted when the last stable set of feet was
+// lost (TippingError.Lifted names them).
 func (c *CaseResult) Lifted() []ElementID { return append([]ElementID(nil), c.lifted...) }
 
-// Equilibrium returns the equilibrium check of the case.
+// Equilibrium returns the equilibrium check of the case (zero in a tipped
+// case).
 func (c *CaseResult) Equilibrium() Equilibrium { return c.eq }
 
 // Tipping returns the tipping margin (zero Tipping without
-// compression-only feet).
+// compression-only feet). In a tipped case its Factor is at most 1 and
+// its Note says that the stand tips.
 func (c *CaseResult) Tipping() Tipping { return c.tip }
 
 // DisplacementsTo writes the displacement of every node, in node order,
-// into dst (nil allocates) and returns it.
+// into dst (nil allocates) and returns it; zeros in a tipped case.
 func (c *CaseResult) DisplacementsTo(dst []Displacement) []Displacement {
 	if dst == nil {
-		dst = make([]Displacement, len(c.disp))
+		dst = make([]Displacement, len(c.nt.m.nodes))
+	}
+	if c.Tipped() {
+		clear(dst[:len(c.nt.m.nodes)])
+		return dst
 	}
 	for i := range c.disp {
 		dst[i] = dispOf(c.disp[i])

@@ -93,7 +93,8 @@ type SweepResult struct {
 	// Mounts holds the stiffness at each place of SweepSettings.Places.
 	Mounts []MountSpread
 	// MaxDisplacement is the largest translation |u| of any node in any
-	// case [m].
+	// case that does not tip [m]; MaxUtilisation and EulerMargin also
+	// leave out tipped cases.
 	MaxDisplacement Spread
 	// MaxUtilisation is the largest member utilisation (a stress ratio,
 	// MemberResult.Utilisation) of any bar or beam in any case; 0 where
@@ -106,8 +107,10 @@ type SweepResult struct {
 	EulerMargin    Spread
 	HasEulerMargin bool
 	// Tipping is the lowest tipping factor (Tipping.Factor where Found)
-	// over the cases of a stand on compression-only feet; set only when
-	// HasTipping, which is true when some case tips at every level.
+	// over the cases of a stand on compression-only feet, at most 1 where
+	// a case tips under its own loads (CaseResult.Tipped); set only when
+	// HasTipping, which is true when some case has a factor at every
+	// level.
 	Tipping    Spread
 	HasTipping bool
 	// Buckling is the lowest positive whole-frame buckling load factor
@@ -162,8 +165,16 @@ func (w *lowest) spread() (Spread, bool) {
 // factor and buckling factor, and the lowest natural frequencies.
 //
 // Errors are those of the analyses, wrapped with the level; no result is
-// returned then. A solve whose residual exceeds MaxResidual gives the
-// result with the worst *ConditionError. A case in which nothing is in
+// returned then. A level at which some case tips (CaseResult.Tipped) is
+// analysed as far as it goes: the tipped cases add their tipping factor
+// (at most 1) to Tipping and nothing else (no displacement, utilisation,
+// Euler margin or buckling), and Sweep returns the result together with
+// the level's *TippingError(s), wrapped with the level, or errors.Join of
+// those of every such level (errors.As finds a *TippingError; the
+// message names every tipped case at every level). A solve whose
+// residual exceeds MaxResidual gives the result with the worst
+// *ConditionError, unless a case tipped: the tipping errors then stand
+// alone, as in Static. A case in which nothing is in
 // compression has no buckling factor and is skipped. These are model
 // results over the stated material ranges: check members and stability
 // against local codes and licensed engineering practice.
@@ -198,16 +209,35 @@ func (s *Solver) Sweep(m *Model, st *SweepSettings) (*SweepResult, error) {
 	var disp, util [3]float64
 	var euler, tip, buck lowest
 	var mr []MemberResult
+	var tips []error // per level where a case tips, wrapped
 	for li, l := range materials.Levels {
 		wrap := func(err error) error {
 			return fmt.Errorf("springnet: sweep at %v material values: %w", l, err)
 		}
 		sr, err := s.Static(m, &StaticSettings{Level: l})
+		var te *TippingError
+		if errors.As(err, &te) && sr != nil {
+			// Some cases tip (named in err); the others are solved. Static
+			// leaves out a ConditionError then: take the cases' own.
+			tips = append(tips, wrap(err))
+			err = nil
+			for _, cr := range sr.cases {
+				if !cr.Tipped() && cr.residual > MaxResidual {
+					keep(&ConditionError{Case: fmt.Sprintf("case %q", cr.name), Residual: cr.residual})
+				}
+			}
+		}
 		if err = keep(err); err != nil {
 			return nil, wrap(err)
 		}
 		res.Static[li] = sr
 		for _, cr := range sr.cases {
+			if tp := cr.Tipping(); tp.Found {
+				tip.take(li, tp.Factor)
+			}
+			if cr.Tipped() {
+				continue // no displacements or member forces
+			}
 			for n := range m.nodes {
 				disp[li] = math.Max(disp[li], cr.Displacement(NodeID(n)).Translation().Norm())
 			}
@@ -219,9 +249,6 @@ func (s *Solver) Sweep(m *Model, st *SweepSettings) (*SweepResult, error) {
 				if b := mr[i].Buckling; b.Rated && b.Compressed && b.Margin > 0 {
 					euler.take(li, b.Margin)
 				}
-			}
-			if tp := cr.Tipping(); tp.Found {
-				tip.take(li, tp.Factor)
 			}
 		}
 
@@ -248,6 +275,9 @@ func (s *Solver) Sweep(m *Model, st *SweepSettings) (*SweepResult, error) {
 
 		if st.Buckling {
 			for c := range m.cases {
+				if sr.cases[c].Tipped() {
+					continue // no static solution to buckle from
+				}
 				br, err := s.Buckling(m, CaseID(c), &BucklingSettings{Modes: 1, Level: l})
 				var few *FewerFactorsError
 				if errors.As(err, &few) && br == nil {
@@ -301,7 +331,12 @@ func (s *Solver) Sweep(m *Model, st *SweepSettings) (*SweepResult, error) {
 		}
 		ms.X, ms.Y, ms.Z, ms.Softest = spreadOf(kx), spreadOf(ky), spreadOf(kz), spreadOf(soft)
 	}
-	if worst != nil {
+	switch {
+	case len(tips) == 1:
+		return res, tips[0]
+	case len(tips) > 1:
+		return res, errors.Join(tips...)
+	case worst != nil:
 		return res, worst
 	}
 	return res, nil
