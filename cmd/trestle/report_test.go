@@ -11,6 +11,8 @@ import (
 
 	"github.com/stretchr/testify/assert"
 	"github.com/stretchr/testify/require"
+
+	"github.com/trestle-go/trestle/springnet/modelfile"
 )
 
 // decodeStrict decodes JSON into v, failing on fields v does not have.
@@ -348,10 +350,37 @@ func demoStructure(t *testing.T, model string) {
 	for _, md := range rep.Modes.Modes {
 		assert.Contains(t, out, fmt.Sprintf("\n  %d  ", md.Number), "mode %d has a row", md.Number)
 	}
-	// Safety warnings come before the governing numbers.
-	if len(rep.Governing.LiftedFeet) > 0 {
-		assert.Less(t, strings.Index(out, "LIFTED FEET"), strings.Index(out, "GOVERNING NUMBERS"))
-	}
+}
+
+// TestLiftedFootWarnedFirst: the demo stand with the cutting force alone
+// (no weight holding it down) lifts foot-2. Statics of a rigid top on
+// four equal vertical springs (each foot takes P/4 plus M·c/Σc² from each
+// moment): the 1200 N down at the headstock, 0.35 m left of the centre of
+// the 1.2 × 0.5 m plan, gives 475 N on each left foot and 125 N on each
+// right one; the 300 N push along Y at 0.82 m height takes 300·0.82 =
+// 246 N from each front foot; the 150 N along −X takes 150·0.82·0.6/1.44
+// = 51 N from each right foot. Only the front right foot (foot-2) ends in
+// tension, 125 − 246 − 51 < 0, so it lifts. The warning comes before the
+// governing numbers.
+func TestLiftedFootWarnedFirst(t *testing.T) {
+	model := string(modelfile.Demo()) + `
+[[case]]
+name = "cutting alone"
+[[case.load]]
+at = "headstock"
+force = [-150, 300, "-1.2 kN"]
+`
+	r := trestle(t, model, "analyse", "--json", "-")
+	require.NoError(t, r.err)
+	var rep AnalysisReport
+	decodeStrict(t, r.stdout, &rep)
+	assert.Equal(t, []string{"foot-2 (cutting alone)"}, rep.Governing.LiftedFeet)
+	text := trestle(t, model, "analyse", "-")
+	require.NoError(t, text.err)
+	out := text.stdout
+	i := strings.Index(out, "LIFTED FEET")
+	require.GreaterOrEqual(t, i, 0)
+	assert.Less(t, i, strings.Index(out, "GOVERNING NUMBERS"))
 }
 
 // TestRangesRigidMount: a mount on a support fixed in every direction has
@@ -386,4 +415,32 @@ func TestRangesRigidMount(t *testing.T) {
 	require.NoError(t, text.err)
 	assert.Contains(t, text.stdout, "WARNINGS")
 	assert.Contains(t, text.stdout, "no stiffness at floor-pad")
+}
+
+// TestDemoFactoredCombination: the demo's factored combination is 1.5 ×
+// "weight and cutting" and every foot stays in contact under both, so by
+// linearity (superposition of a linear elastic model) its displacements,
+// forces and stresses are 1.5 times those of that case.
+func TestDemoFactoredCombination(t *testing.T) {
+	const tol = 1e-9 // two solves of the same system, round-off only
+	r := trestle(t, "", "demo", "--json")
+	require.NoError(t, r.err)
+	var rep AnalysisReport
+	decodeStrict(t, r.stdout, &rep)
+	byName := map[string]CaseReport{}
+	for _, c := range rep.Cases {
+		byName[c.Name] = c
+	}
+	wc, ok := byName["weight and cutting"]
+	require.True(t, ok)
+	fc, ok := byName["factored weight and cutting"]
+	require.True(t, ok)
+	require.True(t, fc.Combination)
+	assert.Empty(t, rep.Governing.LiftedFeet, "the demo's cases are physical: no foot lifts")
+	assert.InEpsilon(t, 1.5*wc.MaxDisplacementM, fc.MaxDisplacementM, tol)
+	assert.InEpsilon(t, 1.5*wc.MaxUtilisation, fc.MaxUtilisation, tol)
+	require.Len(t, fc.Feet, len(wc.Feet))
+	for i := range wc.Feet {
+		assert.InEpsilon(t, 1.5*wc.Feet[i].FZN, fc.Feet[i].FZN, tol, wc.Feet[i].Name)
+	}
 }

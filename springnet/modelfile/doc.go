@@ -170,7 +170,7 @@
 // # Load cases and combinations
 //
 //	[[case]]
-//	name = "cutting"
+//	name = "weight and cutting"
 //	gravity = true                       # or a factor of standard gravity (1.0), or a vector [0, 0, "-9.81 m/s2"]
 //	[[case.load]]                        # as many as needed, each after its case
 //	at = "headstock"                     # node, rigid group or mount
@@ -178,8 +178,14 @@
 //	moment = [0, 0, "20 N*m"]
 //
 //	[[combination]]                      # a factored sum of cases, analysed as one load
-//	name = "weight and cutting"
-//	factors = { "own weight" = 1.35, cutting = 1.5 }
+//	name = "factored weight and cutting"
+//	factors = { "weight and cutting" = 1.5 }   # or several: { "own weight" = 1, "other case" = 1.5 }
+//
+// On compression-only feet give every case the weight that holds the
+// stand down (gravity): a load alone, without it, lifts feet that the
+// weight would keep on the floor. A combination is solved as one load, so
+// its feet are right even though the sum of its cases' results would not
+// be.
 //
 // # Running speeds and response band
 //
