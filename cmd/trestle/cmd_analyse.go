@@ -18,33 +18,11 @@ utilisation, checks and cautions. Works from any folder.`,
 	var of outputFlags
 	of.add(fl)
 	picture := fl.String("picture", "", "also draw the case with the largest displacement to this `file` (.svg or .png)")
-	pos, err := fl.parse(e.args)
+	_, u, err := fl.parseReport(e.args, 0, 0, &of)
 	if err != nil {
 		return handled(err)
 	}
-	if err := fl.wantArgs(pos, 0, 0); err != nil {
-		return err
-	}
-	u, err := parseUnits(of.units)
-	if err != nil {
-		return err
-	}
-	m, name, dyn, err := loadModel(demoArg, e.stdin)
-	if err != nil {
-		return err
-	}
-	a, err := analyse(m, name, materials.Nominal, dyn)
-	if err != nil {
-		return err
-	}
-	if err := reportPicture(e, a, *picture, nil); err != nil {
-		return err
-	}
-	if of.json {
-		return writeJSON(e.stdout, a.report)
-	}
-	writeAnalysis(e.stdout, a.report, u)
-	return nil
+	return printAnalysis(e, demoArg, materials.Nominal, of.json, u, *picture, nil)
 }
 
 func runAnalyse(e env) error {
@@ -58,35 +36,41 @@ first, warnings next, details after.`,
 		"trestle analyse stand.toml\ntrestle analyse --level low --units us stand.toml\ncat stand.toml | trestle analyse --json -", e)
 	var of outputFlags
 	of.add(fl)
-	level := fl.String("level", "nominal", "material `level`: low, nominal or high")
+	level := fl.levelFlag()
 	picture := fl.String("picture", "", "also draw the case with the largest displacement to this `file` (.svg or .png)")
-	pos, err := fl.parse(e.args)
+	pos, u, err := fl.parseReport(e.args, 1, 1, &of)
 	if err != nil {
 		return handled(err)
-	}
-	if err := fl.wantArgs(pos, 1, 1); err != nil {
-		return err
-	}
-	u, err := parseUnits(of.units)
-	if err != nil {
-		return err
 	}
 	l, err := parseLevel(*level)
 	if err != nil {
 		return err
 	}
-	m, name, dyn, err := loadModel(pos[0], e.stdin)
+	return printAnalysis(e, pos[0], l, of.json, u, *picture, pos)
+}
+
+// analyseFile reads the model file (as loadModel) and analyses it at
+// level l.
+func analyseFile(file string, stdin io.Reader, l materials.Level) (*analysed, error) {
+	m, name, dyn, err := loadModel(file, stdin)
+	if err != nil {
+		return nil, err
+	}
+	return analyse(m, name, l, dyn)
+}
+
+// printAnalysis analyses the model file at level l and prints its report,
+// as JSON if asked, else as text in units u; with a picture path it first
+// draws the case with the largest displacement (see reportPicture).
+func printAnalysis(e env, file string, l materials.Level, asJSON bool, u unitSystem, picture string, inputs []string) error {
+	a, err := analyseFile(file, e.stdin, l)
 	if err != nil {
 		return err
 	}
-	a, err := analyse(m, name, l, dyn)
-	if err != nil {
+	if err := reportPicture(e, a, picture, inputs); err != nil {
 		return err
 	}
-	if err := reportPicture(e, a, *picture, pos); err != nil {
-		return err
-	}
-	if of.json {
+	if asJSON {
 		return writeJSON(e.stdout, a.report)
 	}
 	writeAnalysis(e.stdout, a.report, u)

@@ -30,16 +30,9 @@ source of every figure.`,
 		"trestle materials\ntrestle materials --units us\ntrestle materials \"concrete C25/30\"", e)
 	var of outputFlags
 	of.add(fl)
-	pos, err := fl.parse(e.args)
+	pos, u, err := fl.parseReport(e.args, 0, 1, &of)
 	if err != nil {
 		return handled(err)
-	}
-	if err := fl.wantArgs(pos, 0, 1); err != nil {
-		return err
-	}
-	u, err := parseUnits(of.units)
-	if err != nil {
-		return err
 	}
 	var list []materials.Material
 	if len(pos) == 1 {
@@ -121,16 +114,9 @@ shear areas, section moduli and radii of gyration.`,
 		"trestle sections\ntrestle sections \"square-tube 50x3 mm\"\ntrestle sections --units us \"pipe 2in sch40\"", e)
 	var of outputFlags
 	of.add(fl)
-	pos, err := fl.parse(e.args)
+	pos, u, err := fl.parseReport(e.args, 0, 1, &of)
 	if err != nil {
 		return handled(err)
-	}
-	if err := fl.wantArgs(pos, 0, 1); err != nil {
-		return err
-	}
-	u, err := parseUnits(of.units)
-	if err != nil {
-		return err
 	}
 	if len(pos) == 0 {
 		rep := SectionsReport{Schema: schemaSections}

@@ -60,6 +60,23 @@ func pictureFormat(path, override string) (string, error) {
 	return "", fmt.Errorf("picture %s: say .svg or .png (or --format svg|png)", path)
 }
 
+// picturePath checks a --picture path before any work is done: its
+// format ("svg" or "png" by the extension; "" when path is "") and that
+// it does not name the input.
+func picturePath(path, input string) (string, error) {
+	if path == "" {
+		return "", nil
+	}
+	format, err := pictureFormat(path, "")
+	if err != nil {
+		return "", err
+	}
+	if err := checkNotInput(path, input); err != nil {
+		return "", err
+	}
+	return format, nil
+}
+
 // writeScene writes s as SVG or PNG.
 func writeScene(w io.Writer, s *draw.Scene, format string) error {
 	if format == "png" {
@@ -78,20 +95,17 @@ by their share of its strain energy), and writes it as SVG or PNG (by
 the extension of --out).
 Feet, supports and mounts are marked and named; the legend states the
 magnification.`,
-		"trestle draw --out stand.svg stand.toml\ntrestle draw --case cutting --out demo.png demo\ntrestle draw --mode 1 --out sway.svg demo", e)
+		"trestle draw --out stand.svg stand.toml\ntrestle draw --case \"weight and cutting\" --out demo.png demo\ntrestle draw --mode 1 --out sway.svg demo", e)
 	out := fl.String("out", "", "picture `file` to write (.svg or .png); required")
 	format := fl.String("format", "", "`format`: svg or png; default from the --out extension")
 	caseName := fl.String("case", "", "load case to show; default the first")
 	mode := fl.Int("mode", 0, "draw natural mode `N` (from 1) instead of a load case, coloured by strain-energy share")
 	scale := fl.Float64("scale", 0, "displacement magnification; 0 chooses one")
-	level := fl.String("level", "nominal", "material `level`: low, nominal or high")
+	level := fl.levelFlag()
 	labels := fl.Bool("labels", false, "write every node's name (default: feet, supports and mounts only)")
-	pos, err := fl.parse(e.args)
+	pos, err := fl.parseWant(e.args, 1, 1)
 	if err != nil {
 		return handled(err)
-	}
-	if err := fl.wantArgs(pos, 1, 1); err != nil {
-		return err
 	}
 	if *out == "" {
 		return fmt.Errorf("draw: say where to write the picture with --out FILE.svg or FILE.png")

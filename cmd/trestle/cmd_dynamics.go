@@ -60,19 +60,12 @@ speeds given in the file. --picture draws one mode shape.`,
 	var of outputFlags
 	of.add(fl)
 	count := fl.Int("count", 0, "number of modes; default from the file, else 6")
-	level := fl.String("level", "nominal", "material `level`: low, nominal or high")
+	level := fl.levelFlag()
 	picture := fl.String("picture", "", "draw a mode shape to this `file` (.svg or .png)")
 	which := fl.Int("mode", 0, "mode to draw (from 1); default the first that is not a free motion")
-	pos, err := fl.parse(e.args)
+	pos, u, err := fl.parseReport(e.args, 1, 1, &of)
 	if err != nil {
 		return handled(err)
-	}
-	if err := fl.wantArgs(pos, 1, 1); err != nil {
-		return err
-	}
-	u, err := parseUnits(of.units)
-	if err != nil {
-		return err
 	}
 	_ = u
 	if *count < 0 {
@@ -82,14 +75,9 @@ speeds given in the file. --picture draws one mode shape.`,
 	if err != nil {
 		return err
 	}
-	var picFormat string
-	if *picture != "" {
-		if picFormat, err = pictureFormat(*picture, ""); err != nil {
-			return err
-		}
-		if err := checkNotInput(*picture, pos[0]); err != nil {
-			return err
-		}
+	picFormat, err := picturePath(*picture, pos[0])
+	if err != nil {
+		return err
 	}
 	m, name, dyn, err := loadModel(pos[0], e.stdin)
 	if err != nil {
@@ -191,16 +179,9 @@ stiffness in the band; --csv writes the whole curves. The band comes from
 	damping := fl.String("damping", "nominal", "loss factors at their low, nominal or high end (`level`; low gives the higher peaks)")
 	points := fl.Int("points", 0, "frequencies in the band (log spaced); default 400")
 	csvOut := fl.String("csv", "", "write the curves to this CSV `file`")
-	pos, err := fl.parse(e.args)
+	pos, u, err := fl.parseReport(e.args, 1, 1, &of)
 	if err != nil {
 		return handled(err)
-	}
-	if err := fl.wantArgs(pos, 1, 1); err != nil {
-		return err
-	}
-	u, err := parseUnits(of.units)
-	if err != nil {
-		return err
 	}
 	l, err := parseLevel(*level)
 	if err != nil {

@@ -39,13 +39,10 @@ SI units: N/m, N, N·m/rad, kg, kg·m². Compression-only feet count as in
 contact. For checking trestle against other solvers or for research.`,
 		"trestle export --dir out stand.toml\ntrestle export --dir demo-system --level low demo", e)
 	dir := fl.String("dir", "", "folder to write into (created if missing); required")
-	level := fl.String("level", "nominal", "material `level`: low, nominal or high")
-	pos, err := fl.parse(e.args)
+	level := fl.levelFlag()
+	pos, err := fl.parseWant(e.args, 1, 1)
 	if err != nil {
 		return handled(err)
-	}
-	if err := fl.wantArgs(pos, 1, 1); err != nil {
-		return err
 	}
 	if *dir == "" {
 		return fmt.Errorf("export: say which folder to write into with --dir")

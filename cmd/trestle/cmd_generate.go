@@ -46,12 +46,8 @@ trestle generate --kind piers --legs 2x2 --width 1.5m --depth 0.8m --height 0.6m
 	topLoad := fl.String("top-load", "", "downward force at the centre of the top, as its own load case")
 	title := fl.String("title", "", "title written into the file")
 	out := fl.String("out", "", "model `file` to write; default standard output")
-	pos, err := fl.parse(e.args)
-	if err != nil {
+	if _, err := fl.parseWant(e.args, 0, 0); err != nil {
 		return handled(err)
-	}
-	if err := fl.wantArgs(pos, 0, 0); err != nil {
-		return err
 	}
 	u, err := parseUnits(*units)
 	if err != nil {

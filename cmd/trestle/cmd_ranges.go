@@ -70,16 +70,9 @@ factor, displacement. Design to the worse end.`,
 		"trestle ranges stand.toml\ntrestle ranges --json demo", e)
 	var of outputFlags
 	of.add(fl)
-	pos, err := fl.parse(e.args)
+	pos, u, err := fl.parseReport(e.args, 1, 1, &of)
 	if err != nil {
 		return handled(err)
-	}
-	if err := fl.wantArgs(pos, 1, 1); err != nil {
-		return err
-	}
-	u, err := parseUnits(of.units)
-	if err != nil {
-		return err
 	}
 	m, name, dyn, err := loadModel(pos[0], e.stdin)
 	if err != nil {
@@ -308,13 +301,10 @@ built-in demo; one of them may be "-" (standard input).`,
 		"trestle compare stand.toml stand-braced.toml\ntrestle compare --units us demo mine.toml", e)
 	var of outputFlags
 	of.add(fl)
-	level := fl.String("level", "nominal", "material `level`: low, nominal or high")
-	pos, err := fl.parse(e.args)
+	level := fl.levelFlag()
+	pos, err := fl.parseWant(e.args, 2, 2)
 	if err != nil {
 		return handled(err)
-	}
-	if err := fl.wantArgs(pos, 2, 2); err != nil {
-		return err
 	}
 	if pos[0] == "-" && pos[1] == "-" {
 		return fmt.Errorf("compare: only one of A and B can be standard input")
@@ -329,11 +319,7 @@ built-in demo; one of them may be "-" (standard input).`,
 	}
 	var reps [2]*AnalysisReport
 	for i, p := range pos {
-		m, name, dyn, err := loadModel(p, e.stdin)
-		if err != nil {
-			return err
-		}
-		a, err := analyse(m, name, l, dyn)
+		a, err := analyseFile(p, e.stdin, l)
 		if err != nil {
 			return err
 		}

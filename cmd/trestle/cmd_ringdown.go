@@ -72,12 +72,9 @@ into the model.`,
 	window := fl.String("window", "", "fit window `START-END` in seconds of record time; default automatic")
 	picture := fl.String("picture", "", "write a picture of the record and spectrum to this `file` (.svg or .png)")
 	material := fl.String("material", "", "print a model-file material with this catalogue `name` and the measured loss factor")
-	pos, err := fl.parse(e.args)
+	pos, err := fl.parseWant(e.args, 1, 1)
 	if err != nil {
 		return handled(err)
-	}
-	if err := fl.wantArgs(pos, 1, 1); err != nil {
-		return err
 	}
 	if _, err := parseUnits(of.units); err != nil {
 		return err
@@ -106,14 +103,9 @@ into the model.`,
 	}
 	set.Window = ringdown.Span{Start: win.Low, End: win.High}
 	set.Centre = *centre
-	var picFormat string
-	if *picture != "" {
-		if picFormat, err = pictureFormat(*picture, ""); err != nil {
-			return err
-		}
-		if err := checkNotInput(*picture, pos[0]); err != nil {
-			return err
-		}
+	picFormat, err := picturePath(*picture, pos[0])
+	if err != nil {
+		return err
 	}
 	var base materials.Material
 	if *material != "" {

@@ -200,6 +200,38 @@ func (f *flags) wantArgs(pos []string, lo, hi int) error {
 	return nil
 }
 
+// parseWant parses args (see parse) and checks that lo to hi positional
+// arguments remain.
+func (f *flags) parseWant(args []string, lo, hi int) ([]string, error) {
+	pos, err := f.parse(args)
+	if err != nil {
+		return nil, err
+	}
+	if err := f.wantArgs(pos, lo, hi); err != nil {
+		return nil, err
+	}
+	return pos, nil
+}
+
+// parseReport is parseWant for a report command: it also reads the
+// --units of of (added to f with of.add).
+func (f *flags) parseReport(args []string, lo, hi int, of *outputFlags) ([]string, unitSystem, error) {
+	pos, err := f.parseWant(args, lo, hi)
+	if err != nil {
+		return nil, 0, err
+	}
+	u, err := parseUnits(of.units)
+	if err != nil {
+		return nil, 0, err
+	}
+	return pos, u, nil
+}
+
+// levelFlag adds --level, the material level (read with parseLevel).
+func (f *flags) levelFlag() *string {
+	return f.String("level", "nominal", "material `level`: low, nominal or high")
+}
+
 // outputFlags are the flags every report command shares.
 type outputFlags struct {
 	json  bool
