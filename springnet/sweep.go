@@ -169,8 +169,8 @@ func (w *lowest) spread() (Spread, bool) {
 // analysed as far as it goes: the tipped cases add their tipping factor
 // (at most 1) to Tipping and nothing else (no displacement, utilisation,
 // Euler margin or buckling), and Sweep returns the result together with
-// the level's *TippingError(s), wrapped with the level, or errors.Join of
-// those of every such level (errors.As finds a *TippingError; the
+// the *TippingError of the case, wrapped with the level, or errors.Join
+// of one per tipped case and level (errors.As finds the first; the
 // message names every tipped case at every level). A solve whose
 // residual exceeds MaxResidual gives the result with the worst
 // *ConditionError, unless a case tipped: the tipping errors then stand
@@ -219,10 +219,11 @@ func (s *Solver) Sweep(m *Model, st *SweepSettings) (*SweepResult, error) {
 		if errors.As(err, &te) && sr != nil {
 			// Some cases tip (named in err); the others are solved. Static
 			// leaves out a ConditionError then: take the cases' own.
-			tips = append(tips, wrap(err))
 			err = nil
 			for _, cr := range sr.cases {
-				if !cr.Tipped() && cr.residual > MaxResidual {
+				if cr.Tipped() {
+					tips = append(tips, wrap(cr.tipped)) // one line per case and level
+				} else if cr.residual > MaxResidual {
 					keep(&ConditionError{Case: fmt.Sprintf("case %q", cr.name), Residual: cr.residual})
 				}
 			}
