@@ -147,24 +147,8 @@ func (wr *writer) contents(c *Contents) {
 			wr.p("%s = %s\n", key(n.Name), wr.vec(n.At, qLength))
 		}
 	}
-	for i := 0; i < len(c.Members); {
-		j := i + 1
-		for j < len(c.Members) && sameMember(c.Members[i], c.Members[j]) {
-			j++
-		}
-		j = i + groupLen(c.Members[i:j], func(m Member) string { return m.Name })
-		wr.members(c.Members[i:j])
-		i = j
-	}
-	for i := 0; i < len(c.Feet); {
-		j := i + 1
-		for j < len(c.Feet) && sameFoot(c.Feet[i], c.Feet[j]) {
-			j++
-		}
-		j = i + groupLen(c.Feet[i:j], func(f Foot) string { return f.Name })
-		wr.feet(c.Feet[i:j])
-		i = j
-	}
+	eachTable(c.Members, sameMember, func(m Member) string { return m.Name }, wr.members)
+	eachTable(c.Feet, sameFoot, func(f Foot) string { return f.Name }, wr.feet)
 	for i := 0; i < len(c.Supports); {
 		j := i + 1
 		for j < len(c.Supports) && c.Supports[j].Fix == c.Supports[i].Fix {
@@ -316,6 +300,21 @@ func sameFoot(a, b Foot) bool {
 	a.Name, a.Node, a.Line = "", "", 0
 	b.Name, b.Node, b.Line = "", "", 0
 	return a == b
+}
+
+// eachTable calls write with each run of items that one table holds:
+// consecutive items alike but for their names and places (same), named
+// as groupLen allows.
+func eachTable[T any](items []T, same func(a, b T) bool, name func(T) string, write func([]T)) {
+	for i := 0; i < len(items); {
+		j := i + 1
+		for j < len(items) && same(items[i], items[j]) {
+			j++
+		}
+		j = i + groupLen(items[i:j], name)
+		write(items[i:j])
+		i = j
+	}
 }
 
 // groupLen returns how many of the leading items share one table: all
