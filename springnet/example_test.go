@@ -99,6 +99,52 @@ func ExampleStatic() {
 	// tips at 2.043 × the push
 }
 
+// The same stand under two cases, one of which tips: Static still solves
+// the other and returns the result with a *TippingError; the tipped case
+// says so and has no displacements or forces.
+func ExampleCaseResult_Tipped() {
+	var m springnet.Model
+	var corners []springnet.NodeID
+	for _, c := range [4][2]float64{{0, 0}, {0.5, 0}, {0.5, 0.8}, {0, 0.8}} {
+		n := m.AddNode("", springnet.Vec{X: c[0], Y: c[1]})
+		m.AddFoot(n, springnet.Foot{K: springnet.Stiffness6{X: 1e7, Y: 1e7, Z: 2e8}, CompressionOnly: true})
+		corners = append(corners, n)
+	}
+	stand := m.AddRigidGroup("stand", corners...)
+	m.AddMass(stand, springnet.Mass{Kg: 400, Offset: springnet.Vec{Z: 0.9}})
+	top := m.AddMount("top", springnet.Vec{X: 0.25, Y: 0.4, Z: 1.6}, stand)
+	for _, c := range []struct {
+		name string
+		fx   float64
+	}{{"push", 300}, {"shove", 1000}} {
+		id := m.AddLoadCase(c.name)
+		m.SetGravity(id, springnet.Gravity(1))
+		m.AddCaseLoad(id, top, springnet.Load{FX: c.fx})
+	}
+
+	res, err := springnet.Static(&m, nil)
+	var tip *springnet.TippingError
+	switch {
+	case errors.As(err, &tip) && res != nil:
+		fmt.Printf("case %q tips\n", tip.Case)
+	case err != nil:
+		log.Fatal(err)
+	}
+	for c := 0; c < res.NumCases(); c++ {
+		cr := res.Case(springnet.CaseID(c))
+		if cr.Tipped() {
+			// By hand: W·b/2 = 3923 N × 0.25 m against 1000 N × 1.6 m.
+			fmt.Printf("%s: tipped at %.4g × the push, %d feet lifted\n", cr.Name(), cr.Tipping().Factor, len(cr.Lifted()))
+			continue
+		}
+		fmt.Printf("%s: tips at %.4g × the push\n", cr.Name(), cr.Tipping().Factor)
+	}
+	// Output:
+	// case "shove" tips
+	// push: tips at 2.043 × the push
+	// shove: tipped at 0.6129 × the push, 2 feet lifted
+}
+
 // A timber stand on rubber pads: the governing numbers as ranges over the
 // material uncertainty (timber E and the pads' stiffness spread), from
 // one Solver.
