@@ -230,14 +230,22 @@ func caseReport(m *springnet.Model, cr *springnet.CaseResult) CaseReport {
 			}
 		}
 	}
+	// A vertical reaction below roundOff × the largest in the case is
+	// round-off (a foot that carries nothing while the stand balances on
+	// the others): it prints as 0 and is not uplift.
+	var maxFZ float64
+	for _, f := range cr.Feet() {
+		maxFZ = math.Max(maxFZ, math.Abs(f.Reaction.FZ))
+	}
 	for _, f := range cr.Feet() {
 		name := f.Name
 		if name == "" {
 			name = elementLabel(m, f.Element)
 		}
+		fz := cut(f.Reaction.FZ, roundOff*maxFZ)
 		r.Feet = append(r.Feet, FootReport{Name: name, Node: m.NodeName(f.Node),
-			FXN: f.Reaction.FX, FYN: f.Reaction.FY, FZN: f.Reaction.FZ, Share: f.Share,
-			Uplift: f.Uplift && !f.Lifted, Lifted: f.Lifted})
+			FXN: f.Reaction.FX, FYN: f.Reaction.FY, FZN: fz, Share: f.Share,
+			Uplift: f.Uplift && !f.Lifted && fz < 0, Lifted: f.Lifted})
 	}
 	members, err := cr.MembersTo(nil, nil)
 	if err != nil {

@@ -444,3 +444,34 @@ func TestDemoFactoredCombination(t *testing.T) {
 		assert.InEpsilon(t, 1.5*wc.Feet[i].FZN, fc.Feet[i].FZN, tol, wc.Feet[i].Name)
 	}
 }
+
+// TestRoundOffIsNotUplift: in the timber bench's "pounding" case a
+// 300 lbf load stands straight over pad-1 (FL-top is above FL-0), so by
+// statics pad-1 carries all of it, 300 lbf = 1334.4665 N (1 lbf =
+// 4.4482216152605 N, NIST SP 811), and the other pads nothing. The
+// solve leaves them a round-off of about 1e-11 N, which is neither
+// printed nor flagged as uplift.
+func TestRoundOffIsNotUplift(t *testing.T) {
+	const (
+		lbf = 4.4482216152605 // N, NIST SP 811
+		tol = 1e-9            // statics of one solve; round-off only
+	)
+	r := trestle(t, "", "analyse", "--json", "../../examples/timber-bench.toml")
+	require.NoError(t, r.err)
+	var rep AnalysisReport
+	decodeStrict(t, r.stdout, &rep)
+	assert.Empty(t, rep.Governing.UpliftFeet)
+	var pounding *CaseReport
+	for i := range rep.Cases {
+		if rep.Cases[i].Name == "pounding" {
+			pounding = &rep.Cases[i]
+		}
+	}
+	require.NotNil(t, pounding)
+	require.Len(t, pounding.Feet, 4)
+	assert.InEpsilon(t, 300*lbf, pounding.Feet[0].FZN, tol)
+	for _, f := range pounding.Feet[1:] {
+		assert.Zero(t, f.FZN, f.Name)
+		assert.False(t, f.Uplift, f.Name)
+	}
+}
