@@ -154,7 +154,7 @@ func (s *Solver) settle(nt *net, u, f []float64, co []int, tol float64, name str
 			flips = flips[:0]
 		}
 		seen[key] = len(flips)
-		if err := s.factor(nt); err != nil {
+		if err := s.factorAs(nt, false); err != nil {
 			return 0, nil, s.tipOrMechanism(nt, err, name, co)
 		}
 		residual := s.solve(u, f)
@@ -230,6 +230,7 @@ func (s *Solver) tipOrMechanism(nt *net, err error, name string, co []int) error
 	}
 	me.Case = name
 	if len(lifted) == 0 {
+		s.describeMotion(nt, me) // s.k is still the failed matrix
 		return me
 	}
 	if f := s.hangsFree(nt, me.Node, co); f != "" {
@@ -259,7 +260,7 @@ func (s *Solver) hangsFree(nt *net, n NodeID, co []int) string {
 		was[j] = nt.el[i].held
 		nt.el[i].held = true
 	}
-	err := s.factor(nt)
+	err := s.factorAs(nt, false)
 	for j, i := range co {
 		nt.el[i].held = was[j]
 	}
@@ -298,7 +299,7 @@ func (s *Solver) tipping(nt *net, fg, fv []float64, co []int, tol, lam0 float64)
 	path := contactPath{seen: make(map[string]int)} // contact sets visited at this λ
 	maxEvents := 50*len(co) + 100
 	for ev := 0; ev < maxEvents; ev++ {
-		if err := s.factor(nt); err != nil {
+		if err := s.factorAs(nt, false); err != nil {
 			var me *MechanismError
 			if errors.As(err, &me) && last != "" {
 				if f := s.hangsFree(nt, me.Node, co); f != "" {
@@ -306,6 +307,9 @@ func (s *Solver) tipping(nt *net, fg, fv []float64, co []int, tol, lam0 float64)
 						"foot %q lifted off and its node hangs free (a pin-jointed leg)", lam, f)}, nil
 				}
 				return Tipping{Factor: lam, Found: true, LastFoot: last}, nil
+			}
+			if me != nil {
+				s.describeMotion(nt, me) // s.k is still the failed matrix
 			}
 			return Tipping{}, err
 		}

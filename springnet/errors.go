@@ -26,6 +26,7 @@ type MechanismError struct {
 	Motion string  // the free motion in words; empty if not found
 	Pivot  float64 // the failing pivot (diagnostic)
 	Case   string  // the load case, when the mechanism appeared with feet lifted
+	eq     int     // the failed equation (for describeMotion)
 }
 
 // Error names the free node or group and direction, the motion if known,

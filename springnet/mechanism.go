@@ -17,16 +17,16 @@ import (
 const maxDiagnosticPivots = 16
 
 // mechanism turns a failed pivot into a *MechanismError naming the node or
-// group and direction, and tries to describe the free motion: it adds a
-// diagnostic unit-scale spring at each failing equation until the matrix
+// group and direction; describeMotion (describeNull) tries to describe the
+// free motion: it adds a diagnostic unit-scale spring at each failing equation until the matrix
 // factorises, then does two steps of inverse iteration from the first
 // failing direction. The springs exist only inside this diagnosis; no
 // result is ever computed with them.
-func (nt *net) mechanism(k *sparse.Matrix, pe *sparse.PivotError) *MechanismError {
+func (nt *net) mechanism(pe *sparse.PivotError) *MechanismError {
 	d := &nt.dm
 	eq := pe.Col
 	o := d.eqOwner[eq]
-	me := &MechanismError{Node: -1, Group: -1, DOF: dofAt(int(d.eqComp[eq])), Pivot: pe.Pivot}
+	me := &MechanismError{Node: -1, Group: -1, DOF: dofAt(int(d.eqComp[eq])), Pivot: pe.Pivot, eq: eq}
 	if o < d.nNodes {
 		me.Node = NodeID(o)
 		me.Name = nt.m.nodes[o].name
@@ -34,8 +34,13 @@ func (nt *net) mechanism(k *sparse.Matrix, pe *sparse.PivotError) *MechanismErro
 		me.Group = GroupID(o - d.nNodes)
 		me.Name = nt.m.groups[o-d.nNodes].name
 	}
-	me.Motion = nt.describeNull(k, eq)
 	return me
+}
+
+// describeMotion fills in the free motion of me, a failure of the
+// factorisation of s.k (which must still be the failed matrix).
+func (s *Solver) describeMotion(nt *net, me *MechanismError) {
+	me.Motion = nt.describeNull(s.k, me.eq)
 }
 
 func (nt *net) describeNull(k *sparse.Matrix, first int) string {

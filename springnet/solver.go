@@ -23,8 +23,15 @@ type Solver struct {
 }
 
 // factor assembles K for nt and factorises it, analysing the pattern only
-// when it changed. A failed pivot becomes a *MechanismError.
-func (s *Solver) factor(nt *net) error {
+// when it changed. A failed pivot becomes a *MechanismError with its
+// free motion described.
+func (s *Solver) factor(nt *net) error { return s.factorAs(nt, true) }
+
+// factorAs is factor; with describe false the *MechanismError leaves
+// Motion empty (describeMotion fills it in later, while s.k is the
+// failed matrix). Describing the motion costs a second factorisation, a
+// waste in the contact search, where most failures are tipping.
+func (s *Solver) factorAs(nt *net, describe bool) error {
 	if s.b == nil {
 		s.b = sparse.NewBuilder(0)
 	}
@@ -39,7 +46,11 @@ func (s *Solver) factor(nt *net) error {
 	err := s.f.Factorize(s.k)
 	var pe *sparse.PivotError
 	if errors.As(err, &pe) {
-		return nt.mechanism(s.k, pe)
+		me := nt.mechanism(pe)
+		if describe {
+			s.describeMotion(nt, me)
+		}
+		return me
 	}
 	return err
 }
