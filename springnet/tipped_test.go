@@ -239,3 +239,48 @@ func TestTippedCaseAnalyses(t *testing.T) {
 		}
 	})
 }
+
+func TestTippedUnderGravityAlone(t *testing.T) {
+	// A rigid stand whose centre of gravity is outside its feet (x = 0.5 m
+	// beyond feet at x = ±0.2 m) tips under its weight alone; pressed down
+	// at the middle without gravity it stands, each of the four feet
+	// carrying a quarter (symmetry).
+	const b, d, w = 0.4, 0.6, 1000.0
+	var m springnet.Model
+	var nodes []springnet.NodeID
+	var feet []springnet.ElementID
+	for i, p := range [4][2]float64{{b / 2, -d / 2}, {b / 2, d / 2}, {-b / 2, d / 2}, {-b / 2, -d / 2}} {
+		n := m.AddNode(string(rune('A'+i)), springnet.Vec{X: p[0], Y: p[1]})
+		nodes = append(nodes, n)
+		feet = append(feet, m.AddFoot(n, springnet.Foot{Name: "foot " + string(rune('A'+i)),
+			K: springnet.Stiffness6{X: 1e6, Y: 1e6, Z: 1e7}, CompressionOnly: true}))
+	}
+	g := m.AddRigidGroup("stand", nodes...)
+	m.AddMass(g, springnet.Mass{Kg: w / springnet.StandardGravity, Offset: springnet.Vec{X: 0.5, Z: 0.7}})
+	mid := m.AddMount("middle", springnet.Vec{Z: 0.7}, g)
+	weight := m.AddLoadCase("weight")
+	m.SetGravity(weight, springnet.Gravity(1))
+	press := m.AddLoadCase("press")
+	m.AddCaseLoad(press, mid, springnet.Load{FZ: -w})
+
+	res, err := springnet.Static(&m, nil)
+	require.NotNil(t, res, "got %v", err)
+	var te *springnet.TippingError
+	require.True(t, errors.As(err, &te), "got %v", err)
+	assert.Equal(t, "weight", te.Case)
+
+	cr := res.Case(weight)
+	require.True(t, cr.Tipped())
+	tip := cr.Tipping()
+	assert.False(t, tip.Found, "no factor on the other loads: there are none")
+	assert.Contains(t, tip.Note, "gravity alone")
+	assert.NotEmpty(t, cr.Lifted())
+
+	cr = res.Case(press)
+	require.False(t, cr.Tipped())
+	for _, f := range feet {
+		fr, ok := cr.Foot(f)
+		require.True(t, ok)
+		assert.InEpsilon(t, w/4, fr.Reaction.FZ, rigidTol, fr.Name)
+	}
+}
