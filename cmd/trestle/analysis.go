@@ -78,9 +78,14 @@ func analyse(m *springnet.Model, name string, l materials.Level, dyn dynamics) (
 		Pending: append([]string(nil), pendingAnalyses...), Cautions: cautions}
 	res, err := s.Static(m, st)
 	var cond *springnet.ConditionError
-	if errors.As(err, &cond) && res != nil {
+	var tip *springnet.TippingError
+	switch {
+	case errors.As(err, &cond) && res != nil:
 		rep.Warnings = append(rep.Warnings, "suspect solve: "+err.Error())
-	} else if err != nil {
+	case errors.As(err, &tip) && res != nil:
+		// The cases that tip are marked in their reports and named first
+		// among the warnings (alerts); the others stand.
+	case err != nil:
 		return nil, explain(name, err)
 	}
 	rep.Summary = summarise(m, res)
@@ -102,7 +107,7 @@ func analyse(m *springnet.Model, name string, l materials.Level, dyn dynamics) (
 	for c := 0; c < res.NumCases(); c++ {
 		rep.Cases = append(rep.Cases, caseReport(m, res.Case(springnet.CaseID(c))))
 	}
-	rep.Buckling, rep.Warnings = buckling(m, l, rep.Warnings)
+	rep.Buckling, rep.Warnings = buckling(m, res, l, rep.Warnings)
 	a := &analysed{model: m, static: res, report: rep}
 	a.modes, rep.Modes, rep.Warnings = modes(m, l, dyn, rep.Warnings)
 	rep.Governing = governing(rep)
@@ -216,6 +221,16 @@ func clean(v float64) float64 {
 func caseReport(m *springnet.Model, cr *springnet.CaseResult) CaseReport {
 	r := CaseReport{Name: cr.Name(), Combination: m.IsCombination(cr.ID()), Residual: cr.Residual(),
 		Feet: []FootReport{}, Supports: []SupportReport{}, Members: []MemberReport{}, Mounts: []MountMotion{}}
+	tp := cr.Tipping()
+	r.Tipping = TippingReport{Found: tp.Found, Factor: tp.Factor, LastFoot: tp.LastFoot, Note: tp.Note}
+	if cr.Tipped() {
+		// No solution: nothing else to report.
+		r.Tipped = true
+		for _, e := range cr.Lifted() {
+			r.TippedLifted = append(r.TippedLifted, elementLabel(m, e))
+		}
+		return r
+	}
 	for n := 0; n < m.NumNodes(); n++ {
 		id := springnet.NodeID(n)
 		d := cr.Displacement(id).Translation().Norm()
@@ -314,8 +329,6 @@ func caseReport(m *springnet.Model, cr *springnet.CaseResult) CaseReport {
 		AppliedN:   [3]float64{eq.Applied.FX, eq.Applied.FY, eq.Applied.FZ},
 		ReactionsN: [3]float64{eq.Reactions.FX, eq.Reactions.FY, eq.Reactions.FZ},
 		ForceError: eq.ForceError, MomentError: eq.MomentError}
-	tp := cr.Tipping()
-	r.Tipping = TippingReport{Found: tp.Found, Factor: tp.Factor, LastFoot: tp.LastFoot, Note: tp.Note}
 	return r
 }
 
@@ -323,11 +336,16 @@ func caseReport(m *springnet.Model, cr *springnet.CaseResult) CaseReport {
 const bucklingModes = 3
 
 // buckling runs the whole-frame buckling analysis of every case.
-func buckling(m *springnet.Model, l materials.Level, warn []string) ([]BucklingReport, []string) {
+func buckling(m *springnet.Model, static *springnet.StaticResult, l materials.Level, warn []string) ([]BucklingReport, []string) {
 	out := []BucklingReport{}
 	for c := 0; c < m.NumCases(); c++ {
 		id := springnet.CaseID(c)
 		br := BucklingReport{Case: m.CaseName(id), Factors: []float64{}}
+		if static.Case(id).Tipped() {
+			br.Note = "the stand tips under this case"
+			out = append(out, br)
+			continue
+		}
 		res, err := springnet.Buckling(m, id, &springnet.BucklingSettings{Modes: bucklingModes, Level: l})
 		var few *springnet.FewerFactorsError
 		var cond *springnet.ConditionError
@@ -363,6 +381,9 @@ func governing(rep *AnalysisReport) Governing {
 		}
 	}
 	for _, c := range rep.Cases {
+		if c.Tipped {
+			g.TippedCases = append(g.TippedCases, c.Name)
+		}
 		if c.MaxUtilisation > g.MaxUtilisation {
 			g.MaxUtilisation, g.MaxUtilisationMember, g.MaxUtilisationCase = c.MaxUtilisation, c.MaxUtilisationMember, c.Name
 		}
@@ -422,6 +443,12 @@ const (
 func alerts(rep *AnalysisReport) []string {
 	var w []string
 	g := rep.Governing
+	for _, c := range rep.Cases {
+		if c.Tipped {
+			w = append(w, fmt.Sprintf("TIPS OVER under case %q: no stable set of feet stays in contact (lifted: %s); "+
+				"the case has no results. Add weight, widen the base or anchor the feet", c.Name, join(c.TippedLifted)))
+		}
+	}
 	if len(g.LiftedFeet) > 0 {
 		w = append(w, fmt.Sprintf("LIFTED FEET out of contact: %s; the stand rocks on the others", join(g.LiftedFeet)))
 	}
@@ -429,7 +456,7 @@ func alerts(rep *AnalysisReport) []string {
 		w = append(w, fmt.Sprintf("UPLIFT: %s pull the stand down; they need anchors that carry tension", join(g.UpliftFeet)))
 	}
 	for _, c := range rep.Cases {
-		if !c.Tipping.Found && c.Tipping.Note != "" {
+		if !c.Tipped && !c.Tipping.Found && c.Tipping.Note != "" {
 			w = append(w, fmt.Sprintf("TIPPING MARGIN UNKNOWN for case %q: %s; check tipping by hand", c.Name, c.Tipping.Note))
 		}
 	}

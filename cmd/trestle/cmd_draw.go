@@ -157,6 +157,10 @@ magnification.`,
 	if err != nil {
 		return err
 	}
+	if cr := a.report.Cases[c]; cr.Tipped {
+		return fmt.Errorf("draw: %s: the stand tips over under case %q (lifted: %s): it has no deflection to draw",
+			name, cr.Name, join(cr.TippedLifted))
+	}
 	s := sceneOf(a, c, *scale)
 	labelAll(&s, *labels)
 	if err := writeAtomic(*out, pos, func(w io.Writer) error { return writeScene(w, &s, fmtName) }); err != nil {

@@ -112,7 +112,8 @@ func ranges(m *springnet.Model, name string, dyn dynamics) (*RangesReport, error
 	// that failed, drop it with a warning and sweep again; each retry
 	// drops a place or the modes, so this ends.
 	var cond *springnet.ConditionError
-	for err != nil && !(errors.As(err, &cond) && res != nil) {
+	var tip *springnet.TippingError
+	for err != nil && !(errors.As(err, &cond) && res != nil) && !(errors.As(err, &tip) && res != nil) {
 		if i, perr := placeWithoutStiffness(&s, m, st.Places); i >= 0 {
 			rep.Warnings = append(rep.Warnings, fmt.Sprintf("no stiffness at %s: %v", placeName(m, st.Places[i]), perr))
 			st.Places = append(st.Places[:i:i], st.Places[i+1:]...)
@@ -127,7 +128,11 @@ func ranges(m *springnet.Model, name string, dyn dynamics) (*RangesReport, error
 		}
 		res, err = s.Sweep(m, st)
 	}
-	if err != nil {
+	switch {
+	case errors.As(err, &tip):
+		// Each level's governing numbers name the cases that tip.
+		rep.Warnings = append(rep.Warnings, tippedWarnings(res)...)
+	case err != nil:
 		rep.Warnings = append(rep.Warnings, "suspect solve: "+err.Error())
 	}
 	for li, l := range materials.Levels {
@@ -143,7 +148,7 @@ func ranges(m *springnet.Model, name string, dyn dynamics) (*RangesReport, error
 		for c := 0; c < sr.NumCases(); c++ {
 			part.Cases = append(part.Cases, caseReport(m, sr.Case(springnet.CaseID(c))))
 		}
-		if part.Buckling, err = lowestBuckling(&s, m, l); err != nil {
+		if part.Buckling, err = lowestBuckling(&s, m, sr, l); err != nil {
 			rep.Warnings = append(rep.Warnings, err.Error())
 		}
 		lr.Governing = governing(part)
@@ -161,16 +166,40 @@ func ranges(m *springnet.Model, name string, dyn dynamics) (*RangesReport, error
 	return rep, nil
 }
 
+// tippedWarnings names each case under which the stand tips, with the
+// material levels at which it does.
+func tippedWarnings(res *springnet.SweepResult) []string {
+	var w []string
+	sr := res.Static[0]
+	for c := 0; c < sr.NumCases(); c++ {
+		var at []string
+		for li, l := range materials.Levels {
+			if res.Static[li].Case(springnet.CaseID(c)).Tipped() {
+				at = append(at, l.String())
+			}
+		}
+		if len(at) > 0 {
+			w = append(w, fmt.Sprintf("TIPS OVER under case %q at %s material values: no stable set of feet stays in contact; "+
+				"add weight, widen the base or anchor the feet", sr.Case(springnet.CaseID(c)).Name(), join(at)))
+		}
+	}
+	return w
+}
+
 // lowestBuckling returns the lowest positive whole-stand buckling factor
 // of m at level l as a one-entry report naming its case (none when no
 // case has one), solving with s. A case in which nothing is in
-// compression has no factor; a case whose buckling analysis fails is
+// compression has no factor, nor has a case that tips (in sr, the static
+// results at l); a case whose buckling analysis fails is
 // skipped and named in the error.
-func lowestBuckling(s *springnet.Solver, m *springnet.Model, l materials.Level) ([]BucklingReport, error) {
+func lowestBuckling(s *springnet.Solver, m *springnet.Model, sr *springnet.StaticResult, l materials.Level) ([]BucklingReport, error) {
 	var out []BucklingReport
 	var errs []error
 	for c := 0; c < m.NumCases(); c++ {
 		id := springnet.CaseID(c)
+		if sr.Case(id).Tipped() {
+			continue // no solution to buckle from
+		}
 		br, err := s.Buckling(m, id, &springnet.BucklingSettings{Modes: 1, Level: l})
 		var few *springnet.FewerFactorsError
 		var cond *springnet.ConditionError

@@ -121,6 +121,8 @@ func writeAnalysis(w io.Writer, r *AnalysisReport, u unitSystem) {
 	}
 	fmt.Fprintf(tw, "  largest displacement\t%s\tat %s in case %q\n", mo.fu(g.MaxDisplacementM), g.MaxDisplacementNode, g.MaxDisplacementCase)
 	switch {
+	case len(g.TippedCases) > 0:
+		fmt.Fprintf(tw, "  feet\tTIPS OVER\tunder case %s\n", join(quoteAll(g.TippedCases)))
 	case len(g.LiftedFeet) > 0:
 		fmt.Fprintf(tw, "  feet\tLIFTED\t%s\n", join(g.LiftedFeet))
 	case len(g.UpliftFeet) > 0:
@@ -183,6 +185,13 @@ func writeAnalysis(w io.Writer, r *AnalysisReport, u unitSystem) {
 			kind = "COMBINATION"
 		}
 		heading(w, fmt.Sprintf("%s %q", kind, c.Name))
+		if c.Tipped {
+			fmt.Fprintf(w, "  THE STAND TIPS OVER under this case (lifted: %s): no displacements, forces or reactions\n", join(c.TippedLifted))
+			if c.Tipping.Found {
+				fmt.Fprintf(w, "  it tips at %s × the non-gravity loads\n", fixed(c.Tipping.Factor, 2))
+			}
+			continue
+		}
 		fmt.Fprintf(w, "  largest displacement %s at %s", mo.fu(c.MaxDisplacementM), c.MaxDisplacementNode)
 		if c.MaxUtilisationMember != "" {
 			fmt.Fprintf(w, "; highest utilisation %s (%s)", pct(c.MaxUtilisation), c.MaxUtilisationMember)
@@ -308,4 +317,13 @@ func sig3(v float64) string {
 		return "0"
 	}
 	return strconv.FormatFloat(v, 'g', 3, 64)
+}
+
+// quoteAll returns each of s in Go quotes.
+func quoteAll(s []string) []string {
+	out := make([]string, len(s))
+	for i, x := range s {
+		out[i] = fmt.Sprintf("%q", x)
+	}
+	return out
 }

@@ -6,6 +6,7 @@ import (
 	"fmt"
 	"math"
 	"os"
+	"path/filepath"
 	"strings"
 	"testing"
 
@@ -474,4 +475,83 @@ func TestRoundOffIsNotUplift(t *testing.T) {
 		assert.Zero(t, f.FZN, f.Name)
 		assert.False(t, f.Uplift, f.Name)
 	}
+}
+
+// TestTippedCaseReported: the demo with a 20 kN push along Y at the
+// headstock (0.82 m up) tips over its back feet. The other cases keep
+// their results, and the tipping factor on the push follows from
+// rigid-body statics about the back edge (y = 0.5 m, on the floor), where
+// the back feet and every horizontal foot force have no moment: the
+// front feet unload to zero at λ·20 kN·0.82 m = the weight's moment
+// about that edge, which the "own weight" case gives as its front feet's
+// reactions × 0.5 m (equilibrium of that case). The flat foot springs
+// and a flexible frame do not change this in a small-displacement model.
+func TestTippedCaseReported(t *testing.T) {
+	const (
+		push, height, depth = 20e3, 0.82, 0.5 // N, m, m: the case below and the demo's plan
+		tol                 = 1e-6            // a contact path found to round-off
+	)
+	model := string(modelfile.Demo()) + `
+[[case]]
+name = "shove"
+gravity = true
+[[case.load]]
+at = "headstock"
+force = [0, "20 kN", 0]
+`
+	r := trestle(t, model, "analyse", "--json", "-")
+	require.NoError(t, r.err)
+	var rep AnalysisReport
+	decodeStrict(t, r.stdout, &rep)
+	assert.Equal(t, []string{"shove"}, rep.Governing.TippedCases)
+	require.NotEmpty(t, rep.Warnings)
+	assert.True(t, strings.HasPrefix(rep.Warnings[0], "TIPS OVER"), rep.Warnings[0])
+	var own, shove *CaseReport
+	for i := range rep.Cases {
+		switch rep.Cases[i].Name {
+		case "own weight":
+			own = &rep.Cases[i]
+		case "shove":
+			shove = &rep.Cases[i]
+		}
+	}
+	require.NotNil(t, own)
+	require.NotNil(t, shove)
+	require.True(t, shove.Tipped)
+	assert.ElementsMatch(t, []string{"foot-1", "foot-2"}, shove.TippedLifted)
+	assert.Empty(t, shove.Members)
+	require.True(t, shove.Tipping.Found)
+	require.Len(t, own.Feet, 4)
+	front := own.Feet[0].FZN + own.Feet[1].FZN // foot-1 and foot-2 stand at y = 0
+	assert.InEpsilon(t, front*depth/(push*height), shove.Tipping.Factor, tol)
+
+	// The cases that stand are those of the demo.
+	d := trestle(t, "", "analyse", "--json", "demo")
+	require.NoError(t, d.err)
+	var demo AnalysisReport
+	decodeStrict(t, d.stdout, &demo)
+	require.Len(t, rep.Cases, len(demo.Cases)+1)
+	for _, want := range demo.Cases {
+		found := false
+		for _, got := range rep.Cases {
+			if got.Name == want.Name {
+				found = true
+				assert.Equal(t, want, got, want.Name)
+			}
+		}
+		assert.True(t, found, want.Name)
+	}
+
+	text := trestle(t, model, "analyse", "-")
+	require.NoError(t, text.err)
+	assert.Contains(t, text.stdout, "THE STAND TIPS OVER under this case")
+	rg := trestle(t, model, "ranges", "--json", "-")
+	require.NoError(t, rg.err)
+	var rr RangesReport
+	decodeStrict(t, rg.stdout, &rr)
+	require.Len(t, rr.Warnings, 1)
+	assert.Contains(t, rr.Warnings[0], `TIPS OVER under case "shove" at low, nominal, high`)
+	dr := trestle(t, model, "draw", "--case", "shove", "--out", filepath.Join(t.TempDir(), "x.svg"), "-")
+	require.Error(t, dr.err)
+	assert.Contains(t, dr.err.Error(), "tips over")
 }

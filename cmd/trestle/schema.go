@@ -70,6 +70,7 @@ type Governing struct {
 	UpliftFeet            []string   `json:"uplift_feet"`    // bolted feet in tension: "foot (case)"
 	TippingFactor         *float64   `json:"tipping_factor"` // smallest over cases; null if no case can tip
 	TippingCase           string     `json:"tipping_case,omitempty"`
+	TippedCases           []string   `json:"tipped_cases,omitempty"` // cases under which the stand tips over
 }
 
 // MountStiffness is the static stiffness felt at one mount (or rigid
@@ -101,6 +102,12 @@ type CaseReport struct {
 	Equilibrium          EquilibriumReport `json:"equilibrium"`
 	Residual             float64           `json:"residual"` // relative ‖K·u − f‖/‖f‖
 	Tipping              TippingReport     `json:"tipping"`
+	// Tipped: the stand tips under this case (no stable set of feet
+	// stays in contact); it has no displacements, forces or reactions,
+	// TippedLifted names the feet lifted when it lost its last stable
+	// set and Tipping.Factor (at most 1) is where it tips. Absent: false.
+	Tipped       bool     `json:"tipped,omitempty"`
+	TippedLifted []string `json:"tipped_lifted,omitempty"`
 }
 
 // FootReport is the reaction at one foot: the force the floor exerts on
