@@ -28,7 +28,10 @@
 //
 // Text reports are aligned tables, governing numbers first, then
 // warnings (lifted feet, uplift, tipping, overstress, resonance), then
-// details, and they end with the cautions. --units si prints N/µm, mm,
+// details, and they end with the cautions. A case under which the stand
+// tips over (no stable set of feet stays in contact) is named first
+// among the warnings and has no results; the other cases stand. ranges
+// runs one springnet.Sweep (one Solver reused over the levels). --units si prints N/µm, mm,
 // µm, N, MPa, kg; --units us prints lbf/in, in, lbf, psi, lb.
 //
 // --json prints the same report as JSON, always in SI base units with the
