@@ -286,7 +286,7 @@ type CaseResult struct {
 	eq       Equilibrium
 	tip      Tipping
 	lifted   []ElementID
-	held     []ElementID // compression-only feet held sideways (FootResult.Held)
+	held     []ElementID   // compression-only feet held sideways (FootResult.Held)
 	tipped   *TippingError // non-nil: the stand tips under this case; no solution
 }
 
