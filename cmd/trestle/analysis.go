@@ -260,7 +260,7 @@ func caseReport(m *springnet.Model, cr *springnet.CaseResult) CaseReport {
 		fz := cut(f.Reaction.FZ, roundOff*maxFZ)
 		r.Feet = append(r.Feet, FootReport{Name: name, Node: m.NodeName(f.Node),
 			FXN: f.Reaction.FX, FYN: f.Reaction.FY, FZN: fz, Share: f.Share,
-			Uplift: f.Uplift && !f.Lifted && fz < 0, Lifted: f.Lifted})
+			Uplift: f.Uplift && !f.Lifted && fz < 0, Lifted: f.Lifted, Held: f.Lifted && f.Held})
 	}
 	members, err := cr.MembersTo(nil, nil)
 	if err != nil {
@@ -371,7 +371,7 @@ func buckling(m *springnet.Model, static *springnet.StaticResult, l materials.Le
 
 // governing picks the numbers a designer reads first from a report.
 func governing(rep *AnalysisReport) Governing {
-	g := Governing{LiftedFeet: []string{}, UpliftFeet: []string{}}
+	g := Governing{LiftedFeet: []string{}, HeldFeet: []string{}, UpliftFeet: []string{}}
 	first := true
 	for _, mt := range rep.Mounts {
 		// Ties within round-off keep the first mount named.
@@ -393,6 +393,9 @@ func governing(rep *AnalysisReport) Governing {
 		for _, f := range c.Feet {
 			if f.Lifted {
 				g.LiftedFeet = append(g.LiftedFeet, fmt.Sprintf("%s (%s)", f.Name, c.Name))
+			}
+			if f.Held {
+				g.HeldFeet = append(g.HeldFeet, fmt.Sprintf("%s (%s)", f.Name, c.Name))
 			}
 			if f.Uplift {
 				g.UpliftFeet = append(g.UpliftFeet, fmt.Sprintf("%s (%s)", f.Name, c.Name))
@@ -451,6 +454,10 @@ func alerts(rep *AnalysisReport) []string {
 	}
 	if len(g.LiftedFeet) > 0 {
 		w = append(w, fmt.Sprintf("LIFTED FEET out of contact: %s; the stand rocks on the others", join(g.LiftedFeet)))
+	}
+	if len(g.HeldFeet) > 0 {
+		w = append(w, fmt.Sprintf("HELD SIDEWAYS: %s: lifted to the point of carrying no weight, yet friction still holds them sideways "+
+			"(their FX, FY); anchor them or stiffen the frame against racking", join(g.HeldFeet)))
 	}
 	if len(g.UpliftFeet) > 0 {
 		w = append(w, fmt.Sprintf("UPLIFT: %s pull the stand down; they need anchors that carry tension", join(g.UpliftFeet)))

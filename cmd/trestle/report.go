@@ -5,6 +5,8 @@ import (
 	"fmt"
 	"io"
 	"math"
+	"reflect"
+	"slices"
 	"strconv"
 	"strings"
 	"text/tabwriter"
@@ -12,12 +14,51 @@ import (
 	"github.com/trestle-go/trestle/springnet"
 )
 
-// writeJSON writes v indented, with a final newline.
+// writeJSON writes v indented, with a final newline. Lists are [], never
+// null (SCHEMA.md): nil slices in v are made empty first (in a copy when
+// v is not a pointer).
 func writeJSON(w io.Writer, v any) error {
+	if rv := reflect.ValueOf(v); rv.IsValid() && rv.Kind() != reflect.Pointer {
+		p := reflect.New(rv.Type())
+		p.Elem().Set(rv)
+		v = p.Interface()
+	}
+	emptyLists(reflect.ValueOf(v))
 	enc := json.NewEncoder(w)
 	enc.SetIndent("", "  ")
 	enc.SetEscapeHTML(false)
 	return enc.Encode(v)
+}
+
+// emptyLists sets every settable nil slice reachable from v through
+// pointers, structs, slices and arrays to an empty slice.
+func emptyLists(v reflect.Value) {
+	switch v.Kind() {
+	case reflect.Pointer, reflect.Interface:
+		if !v.IsNil() {
+			emptyLists(v.Elem())
+		}
+	case reflect.Struct:
+		for i := range v.NumField() {
+			if v.Type().Field(i).IsExported() {
+				emptyLists(v.Field(i))
+			}
+		}
+	case reflect.Slice:
+		if v.IsNil() {
+			if v.CanSet() {
+				v.Set(reflect.MakeSlice(v.Type(), 0, 0))
+			}
+			return
+		}
+		for i := range v.Len() {
+			emptyLists(v.Index(i))
+		}
+	case reflect.Array:
+		for i := range v.Len() {
+			emptyLists(v.Index(i))
+		}
+	}
 }
 
 // table is a tabwriter for aligned columns, two spaces apart.
@@ -124,7 +165,7 @@ func writeAnalysis(w io.Writer, r *AnalysisReport, u unitSystem) {
 	case len(g.TippedCases) > 0:
 		fmt.Fprintf(tw, "  feet\tTIPS OVER\tunder case %s\n", join(quoteAll(g.TippedCases)))
 	case len(g.LiftedFeet) > 0:
-		fmt.Fprintf(tw, "  feet\tLIFTED\t%s\n", join(g.LiftedFeet))
+		fmt.Fprintf(tw, "  feet\tLIFTED\t%s\n", join(heldNoted(g.LiftedFeet, g.HeldFeet)))
 	case len(g.UpliftFeet) > 0:
 		fmt.Fprintf(tw, "  feet\tUPLIFT\t%s\n", join(g.UpliftFeet))
 	case r.Summary.Feet > 0:
@@ -210,6 +251,8 @@ func writeAnalysis(w io.Writer, r *AnalysisReport, u unitSystem) {
 			for _, ft := range c.Feet {
 				state := "in contact"
 				switch {
+				case ft.Held:
+					state = "LIFTED, held sideways"
 				case ft.Lifted:
 					state = "LIFTED"
 				case ft.Uplift:
@@ -324,6 +367,19 @@ func quoteAll(s []string) []string {
 	out := make([]string, len(s))
 	for i, x := range s {
 		out[i] = fmt.Sprintf("%q", x)
+	}
+	return out
+}
+
+// heldNoted returns the lifted feet ("foot (case)") with those also held
+// sideways marked "foot (case, held sideways)".
+func heldNoted(lifted, held []string) []string {
+	out := make([]string, len(lifted))
+	for i, l := range lifted {
+		out[i] = l
+		if slices.Contains(held, l) && strings.HasSuffix(l, ")") {
+			out[i] = strings.TrimSuffix(l, ")") + ", held sideways)"
+		}
 	}
 	return out
 }

@@ -7,6 +7,7 @@ import (
 	"math"
 	"os"
 	"path/filepath"
+	"reflect"
 	"strings"
 	"testing"
 
@@ -164,6 +165,7 @@ func TestJSONRoundTrip(t *testing.T) {
 	}{
 		{"demo", []string{"demo", "--json"}, func() any { return new(AnalysisReport) }},
 		{"analyse", []string{"analyse", "--json", "testdata/four-legs.toml"}, func() any { return new(AnalysisReport) }},
+		{"analyse held foot", []string{"analyse", "--json", "testdata/bench-planing-120lbf.toml"}, func() any { return new(AnalysisReport) }},
 		{"ranges", []string{"ranges", "--json", "testdata/four-legs.toml"}, func() any { return new(RangesReport) }},
 		{"compare", []string{"compare", "--json", "demo", "testdata/four-legs.toml"}, func() any { return new(CompareReport) }},
 		{"ringdown", []string{"ringdown", "--json", "testdata/tap.csv"}, func() any { return new(RingdownReport) }},
@@ -186,7 +188,53 @@ func TestJSONRoundTrip(t *testing.T) {
 			var generic map[string]any
 			require.NoError(t, json.Unmarshal([]byte(r.stdout), &generic))
 			assert.Contains(t, generic["schema"], "trestle.", "every report names its schema")
+			// SCHEMA.md: null only where the field is a pointer; lists are [].
+			checkNulls(t, generic, reflect.TypeOf(v).Elem(), "")
 		})
+	}
+}
+
+// checkNulls fails on a null in the decoded JSON value j whose Go field in
+// type typ is not a pointer (a list, a number, a text), and on a key that
+// typ does not have.
+func checkNulls(t *testing.T, j any, typ reflect.Type, path string) {
+	t.Helper()
+	for typ.Kind() == reflect.Pointer {
+		typ = typ.Elem()
+	}
+	switch jv := j.(type) {
+	case map[string]any:
+		if typ.Kind() != reflect.Struct {
+			return // a map in Go: no schema fields to check
+		}
+		fields := map[string]reflect.StructField{}
+		for i := range typ.NumField() {
+			f := typ.Field(i)
+			name, _, _ := strings.Cut(f.Tag.Get("json"), ",")
+			if name == "" {
+				name = f.Name
+			}
+			fields[name] = f
+		}
+		for k, val := range jv {
+			f, ok := fields[k]
+			if !assert.True(t, ok, "%s.%s: no such field", path, k) {
+				continue
+			}
+			if val == nil {
+				assert.Equal(t, reflect.Pointer, f.Type.Kind(), "%s.%s is null but is not a pointer field", path, k)
+				continue
+			}
+			checkNulls(t, val, f.Type, path+"."+k)
+		}
+	case []any:
+		if typ.Kind() != reflect.Slice && typ.Kind() != reflect.Array {
+			return
+		}
+		for i, e := range jv {
+			assert.NotNil(t, e, "%s[%d] is null", path, i)
+			checkNulls(t, e, typ.Elem(), fmt.Sprintf("%s[%d]", path, i))
+		}
 	}
 }
 
@@ -554,4 +602,80 @@ force = [0, "20 kN", 0]
 	dr := trestle(t, model, "draw", "--case", "shove", "--out", filepath.Join(t.TempDir(), "x.svg"), "-")
 	require.Error(t, dr.err)
 	assert.Contains(t, dr.err.Error(), "tips over")
+}
+
+// TestHeldFootReported: testdata/bench-planing-120lbf.toml (a copy of
+// springnet/testdata/bench-planing-120lbf.toml) pushes the timber bench
+// 120 lbf along X at FL-top; the contact search cycles on pad-4, which
+// springnet reports held: lifted (FZ = 0) but still held sideways. The
+// report says so in the feet table, the governing row, the JSON and one
+// warning. Horizontal equilibrium of the whole bench (the feet are its
+// only supports) needs the held foot's FX: the four feet's FX add up to
+// −120 lbf, 1 lbf = 4.4482216152605 N (NIST SP 811).
+func TestHeldFootReported(t *testing.T) {
+	const (
+		lbf = 4.4482216152605 // N, NIST SP 811
+		tol = 1e-6            // statics of a converged contact solve; round-off only
+	)
+	path := "testdata/bench-planing-120lbf.toml"
+	r := trestle(t, "", "analyse", "--json", path)
+	require.NoError(t, r.err)
+	var rep AnalysisReport
+	decodeStrict(t, r.stdout, &rep)
+	var planing *CaseReport
+	for i := range rep.Cases {
+		if rep.Cases[i].Name == "planing" {
+			planing = &rep.Cases[i]
+		}
+	}
+	require.NotNil(t, planing)
+	require.Len(t, planing.Feet, 4)
+	var sumFX float64
+	var pad4 FootReport
+	for _, f := range planing.Feet {
+		sumFX += f.FXN
+		if f.Name == "pad-4" {
+			pad4 = f
+		} else {
+			assert.False(t, f.Held, f.Name)
+		}
+	}
+	require.Equal(t, "pad-4", pad4.Name)
+	assert.True(t, pad4.Held)
+	assert.True(t, pad4.Lifted, "a held foot is lifted")
+	assert.Zero(t, pad4.FZN)
+	assert.Zero(t, pad4.Share)
+	// sideways: the held foot carries a real share of the 534 N push
+	// (springnet gives about 94 N along −X); 1 % of the push is far above
+	// round-off and far below that.
+	assert.Greater(t, math.Hypot(pad4.FXN, pad4.FYN), 0.01*120*lbf)
+	assert.InEpsilon(t, -120*lbf, sumFX, tol, "ΣFX of the feet balances the push")
+	assert.Equal(t, []string{"pad-4 (planing)"}, rep.Governing.HeldFeet)
+	assert.Contains(t, rep.Governing.LiftedFeet, "pad-4 (planing)")
+	held := 0
+	for _, w := range rep.Warnings {
+		if strings.HasPrefix(w, "HELD SIDEWAYS: pad-4 (planing)") {
+			held++
+		}
+	}
+	assert.Equal(t, 1, held, "one warning explains the held foot: %q", rep.Warnings)
+
+	text := trestle(t, "", "analyse", path)
+	require.NoError(t, text.err)
+	out := text.stdout
+	assert.Contains(t, out, "pad-4 (planing, held sideways)")
+	var row string
+	for _, l := range strings.Split(out[strings.Index(out, `LOAD CASE "planing"`):], "\n") {
+		if strings.HasPrefix(strings.TrimSpace(l), "pad-4 ") {
+			row = l
+			break
+		}
+	}
+	require.NotEmpty(t, row)
+	assert.True(t, strings.HasSuffix(row, "LIFTED, held sideways"), row)
+	// foot node FZ share FX FY state: FZ is printed 0, FX is not.
+	fields := strings.Fields(row)
+	require.GreaterOrEqual(t, len(fields), 7, row)
+	assert.Equal(t, "0", fields[2], row)
+	assert.NotEqual(t, "0", fields[5], row)
 }

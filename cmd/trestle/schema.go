@@ -67,6 +67,7 @@ type Governing struct {
 	MaxDisplacementNode   string     `json:"max_displacement_node"`
 	MaxDisplacementCase   string     `json:"max_displacement_case"`
 	LiftedFeet            []string   `json:"lifted_feet"`    // "foot (case)"
+	HeldFeet              []string   `json:"held_feet"`      // lifted feet still held sideways: "foot (case)", also in lifted_feet
 	UpliftFeet            []string   `json:"uplift_feet"`    // bolted feet in tension: "foot (case)"
 	TippingFactor         *float64   `json:"tipping_factor"` // smallest over cases; null if no case can tip
 	TippingCase           string     `json:"tipping_case,omitempty"`
@@ -121,6 +122,10 @@ type FootReport struct {
 	Share  float64 `json:"share"`  // FZ over the sum of FZ of all feet
 	Uplift bool    `json:"uplift"` // the foot pulls the stand down (needs an anchor)
 	Lifted bool    `json:"lifted"` // a loose foot out of contact
+	// Held marks a lifted foot at the point of lifting that friction still
+	// holds sideways: its fz_n is 0 but fx_n and fy_n carry the sideways
+	// force (springnet.FootResult.Held). Held implies Lifted.
+	Held bool `json:"held"`
 }
 
 // SupportReport is the reaction at a fixed node (a rigid support).
