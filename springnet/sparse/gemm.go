@@ -12,14 +12,28 @@ const (
 	gemmNC = 2048 // rows of B packed at a time
 )
 
-// gemmWork is the packing workspace of one goroutine.
+// gemmWork is the packing workspace of one goroutine. Its panels grow
+// to what the multiplies it has run needed (at most gemmMC×gemmKC and
+// gemmNC×gemmKC), so a small problem does not pay for (allocate and
+// clear) the 4.5 MB of full-size panels, and a refactorisation of the
+// same pattern, which runs the same multiplies, allocates nothing.
 type gemmWork struct {
 	ap, bp []float64
 	tile   [gemmMR * 8]float64
 }
 
-func newGemmWork() *gemmWork {
-	return &gemmWork{ap: make([]float64, gemmMC*gemmKC), bp: make([]float64, gemmNC*gemmKC)}
+func newGemmWork() *gemmWork { return &gemmWork{} }
+
+// reserve grows the packed panels to what gemmPacked needs for an r×c×k
+// multiply.
+func (w *gemmWork) reserve(r, c, k int) {
+	kc := min(gemmKC, k)
+	if na := (min(gemmMC, r) + gemmMR - 1) / gemmMR * gemmMR * kc; len(w.ap) < na {
+		w.ap = make([]float64, na)
+	}
+	if nb := (min(gemmNC, c) + 7) / 8 * 8 * kc; len(w.bp) < nb {
+		w.bp = make([]float64, nb)
+	}
 }
 
 // kern6x8go is the portable 6×8 tile kernel.
@@ -48,6 +62,7 @@ func kern6x8go(k int, a, b, c []float64, ldc int) {
 // set, only the tiles that reach the lower triangle (j ≤ i) are computed;
 // entries above the diagonal may then be overwritten with junk.
 func (w *gemmWork) gemmPacked(r, c, k int, a []float64, lda int, b []float64, ldb int, cc []float64, ldc int, lower bool) {
+	w.reserve(r, c, k)
 	for jc := 0; jc < c; jc += gemmNC {
 		nc := min(gemmNC, c-jc)
 		if lower && jc >= r {

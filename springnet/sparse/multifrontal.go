@@ -163,6 +163,33 @@ func (w *fworker) alloc(gw gemmPool) {
 // workers' subtrees concurrently, then the top part.
 func (f *Factor) factorNumeric() error {
 	f.neg, f.pos = 0, 0
+	if len(f.workers) > 0 {
+		if err := f.factorSubtrees(); err != nil {
+			return err
+		}
+	}
+	m := f.main
+	m.top, m.neg, m.pos = 0, 0, 0
+	for s := 0; s < f.ns; s++ {
+		if f.taskOf[s] >= 0 {
+			continue
+		}
+		if err := f.super(s, m); err != nil {
+			return err
+		}
+	}
+	f.neg, f.pos = m.neg, m.pos
+	for _, w := range f.workers {
+		f.neg += w.neg
+		f.pos += w.pos
+	}
+	return nil
+}
+
+// factorSubtrees factorises the workers' subtrees concurrently. It is
+// apart from factorNumeric so that the serial path allocates nothing
+// (the WaitGroup and error slice shared with goroutines live on the heap).
+func (f *Factor) factorSubtrees() error {
 	errs := make([]error, len(f.workers))
 	var wg sync.WaitGroup
 	for t, w := range f.workers {
@@ -196,25 +223,7 @@ func (f *Factor) factorNumeric() error {
 			first = err
 		}
 	}
-	if first != nil {
-		return first
-	}
-	m := f.main
-	m.top, m.neg, m.pos = 0, 0, 0
-	for s := 0; s < f.ns; s++ {
-		if f.taskOf[s] >= 0 {
-			continue
-		}
-		if err := f.super(s, m); err != nil {
-			return err
-		}
-	}
-	f.neg, f.pos = m.neg, m.pos
-	for _, w := range f.workers {
-		f.neg += w.neg
-		f.pos += w.pos
-	}
-	return nil
+	return first
 }
 
 // super assembles and partially factorises the front of supernode s on

@@ -53,3 +53,56 @@ func TestParallelMatchesSerial(t *testing.T) {
 		assert.Equal(t, dead, pe.Col)
 	}
 }
+
+// TestRefactorAllocates checks that a refactorisation with the analysed
+// pattern reuses the storage of the first one (the Factor doc promises
+// it): no allocation on one goroutine and, on the subtree-parallel
+// path, only the bookkeeping of starting the workers.
+func TestRefactorAllocates(t *testing.T) {
+	if runtime.GOMAXPROCS(0) < 2 {
+		defer runtime.GOMAXPROCS(runtime.GOMAXPROCS(2))
+	}
+	rng := rand.New(rand.NewPCG(1, 1))
+	a, _ := randomSym(rng, 1500, 6, -1)
+	for _, tc := range []struct {
+		name   string
+		minPar float64
+		// allowed allocations per refactorisation besides one per
+		// worker goroutine (its closure), with their reason
+		allowed float64
+	}{
+		// One goroutine: nothing at all.
+		{"serial", 1e300, 0},
+		// factorSubtrees' error slice and its WaitGroup, both shared with
+		// the worker goroutines and so on the heap.
+		{"parallel", 1, 2},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			f := &Factor{minParallel: tc.minPar}
+			require.NoError(t, f.Analyze(a, &Options{Mode: LDLT, Ordering: NestedDissection}))
+			require.NoError(t, f.Factorize(a))
+			require.Equal(t, tc.minPar == 1, len(f.workers) > 0, "parallel plan as intended")
+			var err error
+			allocs := testing.AllocsPerRun(5, func() { err = f.Factorize(a) })
+			require.NoError(t, err)
+			t.Logf("%.1f allocations per refactorisation", allocs)
+			assert.LessOrEqual(t, allocs, tc.allowed+float64(len(f.workers)))
+		})
+	}
+}
+
+// TestGemmWorkSized checks that the packing panels are sized by the
+// multiplies of the problem: a small matrix, whose fronts are a few
+// columns wide, must not get the full gemmNC×gemmKC panel (4 MB).
+func TestGemmWorkSized(t *testing.T) {
+	rng := rand.New(rand.NewPCG(1, 1))
+	a, _ := randomSym(rng, 200, 4, -1)
+	var f Factor
+	require.NoError(t, f.Analyze(a, &Options{Mode: LDLT}))
+	require.NoError(t, f.Factorize(a))
+	require.NotEmpty(t, f.gw)
+	for _, w := range f.gw {
+		assert.Less(t, len(w.bp), gemmNC*gemmKC/8)
+		assert.Less(t, len(w.ap), gemmMC*gemmKC)
+	}
+}
