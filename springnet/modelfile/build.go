@@ -248,7 +248,7 @@ func (b *builder) run() {
 		if ms.Centre != nil {
 			off = ms.Centre.Sub(m.PlaceAt(p))
 		}
-		m.AddMass(p, springnet.Mass{Kg: ms.Kg, Offset: off, Inertia: ms.Inertia})
+		m.AddMass(p, springnet.Mass{Kg: ms.Kg, Offset: off, Inertia: ms.Inertia, Products: ms.Products})
 	}
 	for _, lc := range c.Cases {
 		if _, dup := b.f.CaseIDs[lc.Name]; dup {

@@ -126,7 +126,11 @@ type Mass struct {
 	Centre  *springnet.Vec // centre of mass in global coordinates [m]
 	Offset  springnet.Vec  // used when Centre is nil [m]
 	Inertia springnet.Vec  // about axes through the centre parallel to X, Y, Z [kg·m²]
-	Line    int
+	// Products holds the products of inertia P_yz, P_zx, P_xy = ∫yz dm,
+	// ∫zx dm, ∫xy dm about the centre (springnet.Mass.Products); the file
+	// gives them as a tensor whose off-diagonal terms are their negatives.
+	Products springnet.Vec
+	Line     int
 }
 
 // Case is a load case: gravity and loads.

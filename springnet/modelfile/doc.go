@@ -164,8 +164,25 @@
 //	box = [1250, 420, 420]               # inertia of a uniform box this size; or
 //	# inertia = [9.4, 46.4, 46.4]        # about axes through the centre parallel to X, Y, Z, or a 3×3 tensor
 //
-// A tensor must have zero products of inertia: the model takes moments
-// about axes parallel to X, Y, Z.
+// "inertia" may be the full inertia tensor about the centre of mass in
+// global axes, three rows of three, as a dynamics text writes it:
+//
+//	inertia = [[Ixx, -Pxy, -Pxz],
+//	           [-Pxy, Iyy, -Pyz],
+//	           [-Pxz, -Pyz, Izz]]
+//
+// The off-diagonal entries are the tensor's own terms, the NEGATED
+// products of inertia Pxy = ∫x·y dm, Pxz = ∫x·z dm, Pyz = ∫y·z dm
+// (x, y, z measured from the centre): a body whose mass lies along the
+// line x = y has Pxy > 0 and a negative entry in row 1, column 2. The
+// tensor must be symmetric (entries (i, j) and (j, i) equal within 1e-9
+// of its trace; otherwise an error names the file, line and entries) and
+// one a body can have (principal moments non-negative, each at most the
+// sum of the other two; springnet's Validate checks this). The model
+// holds the moments and the products (springnet.Mass.Inertia and
+// Products); Write writes a mass with products back as this tensor. For a
+// block turned in space, J = R·diag(Ia, Ib, Ic)·Rᵀ, R's columns being
+// the block's edges in global axes.
 //
 // # Load cases and combinations
 //

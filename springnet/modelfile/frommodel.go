@@ -158,7 +158,7 @@ func FromModel(m *springnet.Model, u Units) (*Contents, error) {
 	}
 	for i := 0; i < m.NumMasses(); i++ {
 		on, ms := m.MassOf(i)
-		c.Masses = append(c.Masses, Mass{On: place(on), Kg: ms.Kg, Offset: ms.Offset, Inertia: ms.Inertia})
+		c.Masses = append(c.Masses, Mass{On: place(on), Kg: ms.Kg, Offset: ms.Offset, Inertia: ms.Inertia, Products: ms.Products})
 	}
 	for i := 0; i < m.NumCases(); i++ {
 		id := springnet.CaseID(i)

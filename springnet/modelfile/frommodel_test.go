@@ -54,7 +54,10 @@ func TestFromModel(t *testing.T) {
 	m.FixGroup(top, springnet.RZ)
 	spindle := m.AddMount("spindle", springnet.Vec{X: 0.4, Y: 0.3, Z: 1.0}, top)
 	tool := m.AddMount("tool", springnet.Vec{X: 0.45, Y: 0.3, Z: 0.95}, spindle)
-	m.AddMass(top, springnet.Mass{Kg: 400, Offset: springnet.Vec{Z: 0.25}, Inertia: springnet.Vec{X: 20, Y: 30, Z: 25}})
+	// Products of inertia (demo values; a body's tensor: principal
+	// moments stay near 20, 25, 30 kg·m²) are written as a tensor and read back.
+	m.AddMass(top, springnet.Mass{Kg: 400, Offset: springnet.Vec{Z: 0.25}, Inertia: springnet.Vec{X: 20, Y: 30, Z: 25},
+		Products: springnet.Vec{X: 1.5, Y: -2, Z: 0.5}})
 	m.AddMass(pad, springnet.Mass{Kg: 3.5})
 	w := m.AddLoadCase("weight")
 	m.SetGravity(w, springnet.Gravity(1))
@@ -88,6 +91,7 @@ func TestFromModel(t *testing.T) {
 		assert.Equal(t, m.CaseTerms(id), f.Model.CaseTerms(id))
 	}
 	assert.Equal(t, m.GroupFixed(top), f.Model.GroupFixed(f.GroupIDs["top"]))
+	assert.Contains(t, text, "inertia = [[20, -0.5, 2], [-0.5, 30, -1.5], [2, -1.5, 25]]", "the tensor, −products off the diagonal")
 	// "pad" is a node: its name is not shared, so it is written plainly.
 	assert.Contains(t, text, `at = "pad"`)
 }

@@ -683,7 +683,7 @@ func (rd *reader) masses(top *tab, c *Contents) {
 			t.errf("box", `give "inertia" or "box", not both`)
 		}
 		if t.has("inertia") {
-			ms.Inertia, _ = t.inertia("inertia")
+			ms.Inertia, ms.Products, _ = t.inertia("inertia")
 		}
 		if b, ok := t.vec("box", qLength); ok {
 			if b.X < 0 || b.Y < 0 || b.Z < 0 {
@@ -707,35 +707,41 @@ func BoxInertia(kg float64, size springnet.Vec) springnet.Vec {
 	return springnet.Vec{X: kg * (y2 + z2) / 12, Y: kg * (x2 + z2) / 12, Z: kg * (x2 + y2) / 12}
 }
 
-// inertia reads [Ixx, Iyy, Izz] or a 3×3 tensor whose products of inertia
-// must be zero (the model takes moments about axes parallel to X, Y, Z).
-func (t *tab) inertia(key string) (springnet.Vec, bool) {
+// inertia reads [Ixx, Iyy, Izz] or a full 3×3 inertia tensor about the
+// centre in global axes, as a dynamics text writes it: moments on the
+// diagonal, the tensor's own off-diagonal terms J_xy = −∫xy dm (the
+// negated products of inertia) off it. It returns the moments and the
+// products of inertia P_yz, P_zx, P_xy (springnet.Mass.Products). A
+// tensor that is not symmetric is refused; springnet's Validate checks
+// that a body can have it.
+func (t *tab) inertia(key string) (moments, products springnet.Vec, ok bool) {
 	v := t.m[key]
-	rows, ok := v.([]any)
-	if ok && len(rows) == 3 {
+	rows, isList := v.([]any)
+	if isList && len(rows) == 3 {
 		if _, nested := rows[0].([]any); nested {
 			var m [3][3]float64
 			for i, r := range rows {
 				row, ok := r.([]any)
 				if !ok || len(row) != 3 {
 					t.errf(key, "a tensor is three rows of three numbers")
-					return springnet.Vec{}, false
+					return springnet.Vec{}, springnet.Vec{}, false
 				}
 				for j, x := range row {
 					f, err := t.r.value(x, qInertia)
 					if err != nil {
 						t.errf(key, "row %d: %v", i+1, err)
-						return springnet.Vec{}, false
+						return springnet.Vec{}, springnet.Vec{}, false
 					}
 					m[i][j] = f
 				}
 			}
-			tol := 1e-9 * (math.Abs(m[0][0]) + math.Abs(m[1][1]) + math.Abs(m[2][2]))
+			tol := symmetryTol * (math.Abs(m[0][0]) + math.Abs(m[1][1]) + math.Abs(m[2][2]))
 			for i := 0; i < 3; i++ {
 				for j := i + 1; j < 3; j++ {
-					if math.Abs(m[i][j]) > tol || math.Abs(m[j][i]) > tol {
-						t.errf(key, "products of inertia (off-diagonal terms) are not supported: give the moments about axes parallel to X, Y, Z through the centre, or split the machine into point masses")
-						return springnet.Vec{}, false
+					if math.Abs(m[i][j]-m[j][i]) > tol {
+						t.errf(key, "the inertia tensor is not symmetric: row %d column %d is %g, row %d column %d is %g; "+
+							"they must be equal (both −∫%s dm)", i+1, j+1, m[i][j], j+1, i+1, m[j][i], axisPair[i+j-1])
+						return springnet.Vec{}, springnet.Vec{}, false
 					}
 				}
 			}
@@ -743,15 +749,29 @@ func (t *tab) inertia(key string) (springnet.Vec, bool) {
 			if iv.X < 0 || iv.Y < 0 || iv.Z < 0 {
 				t.errf(key, "moments of inertia must not be negative")
 			}
-			return iv, true
+			pv := springnet.Vec{
+				X: -(m[1][2] + m[2][1]) / 2,
+				Y: -(m[0][2] + m[2][0]) / 2,
+				Z: -(m[0][1] + m[1][0]) / 2,
+			}
+			return iv, pv, true
 		}
 	}
 	iv, ok := t.vec(key, qInertia)
 	if ok && (iv.X < 0 || iv.Y < 0 || iv.Z < 0) {
 		t.errf(key, "moments of inertia must not be negative")
 	}
-	return iv, ok
+	return iv, springnet.Vec{}, ok
 }
+
+// symmetryTol: the off-diagonal terms of an inertia tensor in a file may
+// differ by this fraction of its trace (numbers written to about ten
+// figures); more is a mistake, not round-off.
+const symmetryTol = 1e-9
+
+// axisPair names the product of the off-diagonal term (i, j), i < j, by
+// i+j-1: (1,2) xy, (1,3) xz, (2,3) yz.
+var axisPair = [3]string{"xy", "xz", "yz"}
 
 func (rd *reader) cases(top *tab, order map[string][]string, c *Contents) {
 	for _, t := range rd.arrayOf(top, "case") {

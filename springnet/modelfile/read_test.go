@@ -316,11 +316,19 @@ on = "C3"
 mass = 5
 offset = [0, 0, "1e308 km"]
 `, 10, `is too large`},
-		{"inertia products", head + `[[mass]]
+		{"inertia tensor not symmetric", head + `[[mass]]
 on = "B1"
 mass = 10
-inertia = [[1, 0.5, 0], [0.5, 1, 0], [0, 0, 1]]
-`, 10, `products of inertia`},
+inertia = [[1, -0.5, 0], [0.5, 1, 0], [0, 0, 1]]
+`, 10, `not symmetric: row 1 column 2 is -0.5, row 2 column 1 is 0.5`},
+		// Eigenvalues of [[1, -2, 0], [-2, 1, 0], [0, 0, 1]] are -1, 1, 3
+		// (1 ± 2 and 1): a negative principal moment, which no body has.
+		// springnet's Validate says so; the message goes to the mass's line.
+		{"inertia tensor of no body", head + `[[mass]]
+on = "B1"
+mass = 10
+inertia = [[1, -2, 0], [-2, 1, 0], [0, 0, 1]]
+`, 7, `are not those of a body`},
 		{"members need a section", head + `[[beam]]
 ends = ["A1", "B1"]
 material = "steel S235"

@@ -181,7 +181,17 @@ func (wr *writer) contents(c *Contents) {
 		} else if m.Offset != (springnet.Vec{}) {
 			wr.p("offset = %s\n", wr.vec(m.Offset, qLength))
 		}
-		if m.Inertia != (springnet.Vec{}) {
+		switch {
+		case m.Products != (springnet.Vec{}):
+			// The tensor as the reader takes it: −products off the diagonal.
+			j := springnet.Mass{Inertia: m.Inertia, Products: m.Products}.Tensor()
+			rows := make([]string, 3)
+			for i, r := range j {
+				// + 0 writes −0 (a zero product negated) as 0.
+				rows[i] = wr.vec(springnet.Vec{X: r[0] + 0, Y: r[1] + 0, Z: r[2] + 0}, qInertia)
+			}
+			wr.p("inertia = [%s]\n", strings.Join(rows, ", "))
+		case m.Inertia != (springnet.Vec{}):
 			wr.p("inertia = %s\n", wr.vec(m.Inertia, qInertia))
 		}
 	}
