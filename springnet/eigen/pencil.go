@@ -9,12 +9,13 @@ import (
 	"gonum.org/v1/gonum/floats"
 )
 
-// pencil builds A(α) = K + α·B on the union of the patterns of K and B, so
-// that every shift gives the same pattern and one sparse.Factor keeps its
-// symbolic analysis across shifts.
+// pencil forms A(α) = K + α·B on the union of the patterns of K and B,
+// computed once: every shift refills the values of the same matrix
+// (sparse.Combine), so one sparse.Factor keeps its symbolic analysis
+// across shifts and no matrix is assembled per shift.
 type pencil struct {
 	k, b     *sparse.Matrix
-	bld      *sparse.Builder
+	sum      *sparse.Matrix // union pattern of K and B; values of the last α formed
 	f        sparse.Factor
 	opt      sparse.Options
 	a        *sparse.Matrix // the matrix last factorised successfully
@@ -27,39 +28,39 @@ type pencil struct {
 	x        []float64
 }
 
+// newPencil returns the pencil of K and B, which the callers have checked
+// to be of the same order.
 func newPencil(k, b *sparse.Matrix, s *Settings) *pencil {
+	sum, err := sparse.Union(k, b)
+	if err != nil {
+		panic(err) // the orders were checked by the callers
+	}
 	return &pencil{
 		k: k, b: b,
-		bld: sparse.NewBuilder(k.N()),
+		sum: sum,
 		opt: sparse.Options{Ordering: s.Ordering, Mode: sparse.LDLT, Coords: s.Coords},
 		r:   make([]float64, k.N()),
 		x:   make([]float64, k.N()),
 	}
 }
 
-// at assembles K + α·B.
+// at forms K + α·B in pc.sum (overwriting the previous α's values) and
+// returns it.
 func (pc *pencil) at(alpha float64) *sparse.Matrix {
-	n := pc.k.N()
-	pc.bld.Reset(n)
-	for j := 0; j < n; j++ {
-		rows, vals := pc.k.Col(j)
-		for p, i := range rows {
-			pc.bld.Add(i, j, vals[p])
-		}
-		rows, vals = pc.b.Col(j)
-		for p, i := range rows {
-			pc.bld.Add(i, j, alpha*vals[p])
-		}
+	if err := sparse.Combine(pc.sum, pc.k, alpha, pc.b); err != nil {
+		panic(err) // pc.sum is the union of the patterns of K and B
 	}
-	return pc.bld.Matrix()
+	return pc.sum
 }
 
 // factor factorises K + α·B (LDLᵀ) and checks the factorisation with the
 // residual of one solve. It returns a *sparse.PivotError for a singular
 // matrix and errUnstable when the solve residual is poor.
 func (pc *pencil) factor(alpha float64) error {
+	// The last factorised matrix's values are overwritten: until this
+	// factorisation succeeds there is none to solve with.
+	pc.a, pc.ok = nil, false
 	a := pc.at(alpha)
-	pc.ok = false
 	if !pc.analyzed {
 		if err := pc.f.Analyze(a, &pc.opt); err != nil {
 			return fmt.Errorf("eigen: sparse analysis: %w", err)
