@@ -200,3 +200,48 @@ func BenchmarkSolveMany(b *testing.B) {
 		})
 	}
 }
+
+// BenchmarkShift times forming K − σ·M on the 20³ lattice (M its lumped
+// mass as a diagonal matrix) for a new σ: by a Builder from K's and σ·M's
+// entries, as an eigenvalue search did per shift, and by Combine into
+// their union pattern computed once.
+func BenchmarkShift(b *testing.B) {
+	l := benchLattice(b, 20)
+	n := l.K.N()
+	mb := sparse.NewBuilder(n)
+	for j, v := range l.Mass {
+		mb.Add(j, j, v)
+	}
+	m := mb.Matrix()
+	const sigma = 4e5 // [rad²/s²] near the lattice's lowest eigenvalue
+	b.Run("Builder", func(b *testing.B) {
+		bld := sparse.NewBuilder(n)
+		b.ReportAllocs()
+		for it := 0; it < b.N; it++ {
+			bld.Reset(n)
+			for j := 0; j < n; j++ {
+				rows, vals := l.K.Col(j)
+				for p, i := range rows {
+					bld.Add(i, j, vals[p])
+				}
+				rows, vals = m.Col(j)
+				for p, i := range rows {
+					bld.Add(i, j, -sigma*vals[p])
+				}
+			}
+			_ = bld.Matrix()
+		}
+	})
+	b.Run("Combine", func(b *testing.B) {
+		dst, err := sparse.Union(l.K, m)
+		if err != nil {
+			b.Fatal(err)
+		}
+		b.ReportAllocs()
+		for it := 0; it < b.N; it++ {
+			if err := sparse.Combine(dst, l.K, -sigma, m); err != nil {
+				b.Fatal(err)
+			}
+		}
+	})
+}
