@@ -245,3 +245,37 @@ func BenchmarkShift(b *testing.B) {
 		}
 	})
 }
+
+// BenchmarkSolveTwo compares, on the 20³ lattice, two right-hand sides
+// solved by two Solve calls and by one SolveMany (the block of two of the
+// eigen solver's Lanczos process).
+func BenchmarkSolveTwo(b *testing.B) {
+	l := benchLattice(b, 20)
+	var f sparse.Factor
+	if err := f.Analyze(l.K, &sparse.Options{Coords: l.Coords}); err != nil {
+		b.Fatal(err)
+	}
+	if err := f.Factorize(l.K); err != nil {
+		b.Fatal(err)
+	}
+	rhs := [][]float64{l.Load, make([]float64, l.N())}
+	for i, v := range l.Load {
+		rhs[1][i] = v * float64(1+i%3)
+	}
+	x := [][]float64{make([]float64, l.N()), make([]float64, l.N())}
+	b.Run("Solve", func(b *testing.B) {
+		c0 := cpuTime()
+		for it := 0; it < b.N; it++ {
+			f.Solve(x[0], rhs[0])
+			f.Solve(x[1], rhs[1])
+		}
+		b.ReportMetric((cpuTime()-c0).Seconds()/float64(b.N), "cpu-s/op")
+	})
+	b.Run("SolveMany", func(b *testing.B) {
+		c0 := cpuTime()
+		for it := 0; it < b.N; it++ {
+			f.SolveMany(x, rhs)
+		}
+		b.ReportMetric((cpuTime()-c0).Seconds()/float64(b.N), "cpu-s/op")
+	})
+}

@@ -123,9 +123,9 @@ type Factor struct {
 	minParallel float64 // work threshold for going parallel (0: default)
 	gw          gemmPool
 	y           []float64
-	xblk        []float64 // SolveMany workspace
-	tblk        []float64 // SolveMany workspace: a supernode's off-diagonal rows
-	tbuf        []float64 // Solve workspace: a supernode's off-diagonal rows
+	xblk        []float64   // SolveMany workspace: the right-hand sides, N each
+	xcols       [][]float64 // SolveMany workspace: views of xblk
+	tbuf        []float64   // Solve workspace: a supernode's off-diagonal rows
 	ok          bool
 	neg         int
 	pos         int

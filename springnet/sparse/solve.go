@@ -5,6 +5,7 @@ import (
 
 	"gonum.org/v1/gonum/blas"
 	"gonum.org/v1/gonum/blas/blas64"
+	"gonum.org/v1/gonum/floats"
 )
 
 // SolveMany solves A·x = b for several right-hand sides at once, reading
@@ -22,16 +23,18 @@ func (f *Factor) SolveMany(dst, b [][]float64) {
 	if nr == 0 {
 		return
 	}
-	x := f.block(nr)
+	xs := f.block(nr)
 	for r, br := range b {
+		x := xs[r]
 		for k, i := range f.perm {
-			x[k*nr+r] = br[i]
+			x[k] = br[i]
 		}
 	}
-	f.solveBlock(x, nr)
+	f.solveCols(xs)
 	for r, dr := range dst {
+		x := xs[r]
 		for k, i := range f.perm {
-			dr[i] = x[k*nr+r]
+			dr[i] = x[k]
 		}
 	}
 }
@@ -50,109 +53,129 @@ func (f *Factor) SolveBlock(dst, b []float64, nrhs int) {
 	if nrhs == 0 {
 		return
 	}
-	x := f.block(nrhs)
-	for r := 0; r < nrhs; r++ {
+	xs := f.block(nrhs)
+	for r, x := range xs {
 		col := b[r*n : (r+1)*n]
 		for k, i := range f.perm {
-			x[k*nrhs+r] = col[i]
+			x[k] = col[i]
 		}
 	}
-	f.solveBlock(x, nrhs)
-	for r := 0; r < nrhs; r++ {
+	f.solveCols(xs)
+	for r, x := range xs {
 		col := dst[r*n : (r+1)*n]
 		for k, i := range f.perm {
-			col[i] = x[k*nrhs+r]
+			col[i] = x[k]
 		}
 	}
 }
 
-// block returns the workspace for nr right-hand sides, grown if needed.
-func (f *Factor) block(nr int) []float64 {
+// block returns the workspace for nr right-hand sides in pivot order, one
+// slice of length N each, grown if needed.
+func (f *Factor) block(nr int) [][]float64 {
 	if len(f.xblk) < f.n*nr {
 		f.xblk = make([]float64, f.n*nr)
 	}
-	if len(f.tblk) < len(f.tbuf)*nr {
-		f.tblk = make([]float64, len(f.tbuf)*nr)
+	if len(f.xcols) < nr {
+		f.xcols = make([][]float64, nr)
 	}
-	return f.xblk[:f.n*nr]
+	xs := f.xcols[:nr]
+	for r := range xs {
+		xs[r] = f.xblk[r*f.n : (r+1)*f.n]
+	}
+	return xs
 }
 
-// blockBLAS is the supernode width from which solveBlock uses the gonum
-// BLAS level-3 kernels (triangular solve and multiply on the block of
-// right-hand sides) rather than plain loops.
-const blockBLAS = 8
-
-// solveBlock overwrites the row-major N×nr block x (pivot order) with
-// (L·D·Lᵀ)⁻¹·x.
-func (f *Factor) solveBlock(x []float64, nr int) {
-	row := func(i int) []float64 { return x[i*nr : (i+1)*nr] }
+// solveCols overwrites every xs[r] (pivot order) with (L·D·Lᵀ)⁻¹·xs[r].
+// It is solvePermuted with the right-hand sides inside the loops over
+// the rows of L, so each row of a supernode's off-diagonal block is read
+// from memory once for all of them (those reads dominate a solve).
+func (f *Factor) solveCols(xs [][]float64) {
+	// Forward: L·y = b.
 	for s := 0; s < f.ns; s++ {
 		c0, c1 := f.sfirst[s], f.sfirst[s+1]
 		k := c1 - c0
 		rows := f.srow[f.sptr[s]:f.sptr[s+1]]
 		lx := f.lx[f.lptr[s]:f.lptr[s+1]]
-		if k >= blockBLAS && nr > 1 {
-			xs := blas64.General{Rows: k, Cols: nr, Stride: nr, Data: x[c0*nr : c1*nr]}
-			blas64.Trsm(blas.Left, blas.NoTrans, 1, blas64.Triangular{Uplo: blas.Lower, Diag: blas.Unit, N: k, Stride: k, Data: lx[:k*k]}, xs)
-			if u := len(rows) - k; u > 0 {
-				t := f.tblk[:u*nr]
-				blas64.Gemm(blas.NoTrans, blas.NoTrans, 1, blas64.General{Rows: u, Cols: k, Stride: k, Data: lx[k*k:]}, xs, 0, blas64.General{Rows: u, Cols: nr, Stride: nr, Data: t})
-				for i, r := range rows[k:] {
-					xi := row(r)
-					for q, v := range t[i*nr : (i+1)*nr] {
-						xi[q] -= v
-					}
+		if k >= solveBLAS {
+			tri := blas64.Triangular{Uplo: blas.Lower, Diag: blas.Unit, N: k, Stride: k, Data: lx[:k*k]}
+			for _, x := range xs {
+				blas64.Trsv(blas.NoTrans, tri, blas64.Vector{N: k, Inc: 1, Data: x[c0:c1]})
+			}
+			for i, r := range rows[k:] {
+				li := lx[(k+i)*k : (k+i+1)*k]
+				for _, x := range xs {
+					x[r] -= floats.Dot(li, x[c0:c1])
 				}
 			}
 			continue
 		}
-		for i := 1; i < len(rows); i++ {
-			li := lx[i*k : i*k+min(i, k)]
-			xi := row(rows[i])
-			for c, l := range li {
-				if l == 0 {
-					continue
+		for _, x := range xs {
+			xv := x[c0:c1]
+			for j := 1; j < k; j++ {
+				lj := lx[j*k : j*k+j]
+				v := xv[j]
+				for c, l := range lj {
+					v -= l * xv[c]
 				}
-				xc := row(c0 + c)
-				for q, v := range xc {
-					xi[q] -= l * v
+				xv[j] = v
+			}
+		}
+		for i := k; i < len(rows); i++ {
+			li := lx[i*k : (i+1)*k]
+			r := rows[i]
+			for _, x := range xs {
+				xv := x[c0:c1]
+				v := 0.0
+				for c, l := range li {
+					v += l * xv[c]
 				}
+				x[r] -= v
 			}
 		}
 	}
-	for j, dj := range f.d {
-		xj := row(j)
-		for q := range xj {
-			xj[q] /= dj
+	for _, x := range xs {
+		for j, dj := range f.d {
+			x[j] /= dj
 		}
 	}
+	// Backward: Lᵀ·x = y.
 	for s := f.ns - 1; s >= 0; s-- {
 		c0, c1 := f.sfirst[s], f.sfirst[s+1]
 		k := c1 - c0
 		rows := f.srow[f.sptr[s]:f.sptr[s+1]]
 		lx := f.lx[f.lptr[s]:f.lptr[s+1]]
-		if k >= blockBLAS && nr > 1 {
-			xs := blas64.General{Rows: k, Cols: nr, Stride: nr, Data: x[c0*nr : c1*nr]}
-			if u := len(rows) - k; u > 0 {
-				t := f.tblk[:u*nr]
-				for i, r := range rows[k:] {
-					copy(t[i*nr:(i+1)*nr], row(r))
-				}
-				blas64.Gemm(blas.Trans, blas.NoTrans, -1, blas64.General{Rows: u, Cols: k, Stride: k, Data: lx[k*k:]}, blas64.General{Rows: u, Cols: nr, Stride: nr, Data: t}, 1, xs)
-			}
-			blas64.Trsm(blas.Left, blas.Trans, 1, blas64.Triangular{Uplo: blas.Lower, Diag: blas.Unit, N: k, Stride: k, Data: lx[:k*k]}, xs)
-			continue
-		}
-		for i := len(rows) - 1; i > 0; i-- {
-			li := lx[i*k : i*k+min(i, k)]
-			xi := row(rows[i])
-			for c, l := range li {
-				if l == 0 {
+		for i := k; i < len(rows); i++ {
+			li := lx[i*k : (i+1)*k]
+			r := rows[i]
+			for _, x := range xs {
+				xi := x[r]
+				if xi == 0 {
 					continue
 				}
-				xc := row(c0 + c)
-				for q, v := range xi {
-					xc[q] -= l * v
+				if k >= solveBLAS {
+					floats.AddScaled(x[c0:c1], -xi, li)
+					continue
+				}
+				xv := x[c0:c1]
+				for c, l := range li {
+					xv[c] -= l * xi
+				}
+			}
+		}
+		if k >= solveBLAS {
+			tri := blas64.Triangular{Uplo: blas.Lower, Diag: blas.Unit, N: k, Stride: k, Data: lx[:k*k]}
+			for _, x := range xs {
+				blas64.Trsv(blas.Trans, tri, blas64.Vector{N: k, Inc: 1, Data: x[c0:c1]})
+			}
+			continue
+		}
+		for _, x := range xs {
+			xv := x[c0:c1]
+			for i := k - 1; i > 0; i-- {
+				li := lx[i*k : i*k+i]
+				xi := xv[i]
+				for c, l := range li {
+					xv[c] -= l * xi
 				}
 			}
 		}
