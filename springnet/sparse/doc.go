@@ -13,6 +13,9 @@
 // explicit zeros keep their place in the pattern, so the pattern depends
 // only on the positions added. Numbers are whatever the caller's units
 // are; the package is pure numerics and imports nothing of this module.
+// For a family A(α) = X + α·Y (a shifted K − σ·M), Union makes the union
+// pattern once and Combine refills its values for each α, with no
+// assembly and the same pattern, so a Factor keeps its analysis.
 //
 // A Factor is analysed once per pattern and refactorised for new values:
 //
@@ -36,8 +39,12 @@
 // Schur complement passed to the parent. With GOMAXPROCS > 1 and enough
 // work, independent subtrees are factorised concurrently and the large
 // multiplies near the root are shared between goroutines (run with
-// GOMAXPROCS=1 for a single thread). Refactorisation reuses all the
-// storage of the first factorisation. Solve, SolveMany and SolveBlock use
+// GOMAXPROCS=1 for a single thread). The packing panels of the multiply
+// grow to what the fronts need, so a small problem allocates little.
+// Refactorisation reuses all the storage of the first factorisation (on
+// one goroutine it allocates nothing). SolveMany and SolveBlock read each
+// row of L once for all their right-hand sides, which makes a block of
+// two cheaper than two Solve calls. Solve, SolveMany and SolveBlock use
 // a workspace inside the Factor: one goroutine at a time.
 //
 // # Errors
