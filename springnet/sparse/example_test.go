@@ -91,3 +91,48 @@ func ExamplePivotError() {
 	// Output:
 	// singular at row 1 (negative: false)
 }
+
+// Two springs of k = 1000 N/m in a chain from a fixed support, with a
+// 1 kg mass at each node: K = k·[2 −1; −1 1], M = I, whose eigenvalues
+// are the roots of λ² − 3kλ + k² = 0, λ = k(3 ∓ √5)/2 = 382.0 and
+// 2618 rad²/s². Union makes the pattern of K − σ·M once; Combine
+// refills it for each σ, and the negative pivots of its LDLᵀ count the
+// eigenvalues below σ.
+func ExampleCombine() {
+	const k = 1000.0 // N/m
+	kb := sparse.NewBuilder(2)
+	kb.Add(0, 0, 2*k)
+	kb.Add(1, 0, -k)
+	kb.Add(1, 1, k)
+	K := kb.Matrix()
+	mb := sparse.NewBuilder(2)
+	mb.Add(0, 0, 1) // kg
+	mb.Add(1, 1, 1)
+	M := mb.Matrix()
+	A, err := sparse.Union(K, M)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	var f sparse.Factor
+	if err := f.Analyze(A, &sparse.Options{Mode: sparse.LDLT}); err != nil {
+		fmt.Println(err)
+		return
+	}
+	for _, sigma := range []float64{300, 1000, 3000} { // rad²/s²
+		if err := sparse.Combine(A, K, -sigma, M); err != nil {
+			fmt.Println(err)
+			return
+		}
+		if err := f.Factorize(A); err != nil {
+			fmt.Println(err)
+			return
+		}
+		neg, _ := f.Inertia()
+		fmt.Printf("eigenvalues below %.4g: %d\n", sigma, neg)
+	}
+	// Output:
+	// eigenvalues below 300: 0
+	// eigenvalues below 1000: 1
+	// eigenvalues below 3000: 2
+}
