@@ -67,7 +67,12 @@ const roundOffFloor = 1e-10
 
 // sameButRounding reports whether want and got have the same words and
 // layout and numbers that agree within goldenTol.
-func sameButRounding(want, got string) bool {
+func sameButRounding(want, got string) bool { return sameWithin(want, got, goldenTol) }
+
+// sameWithin reports whether want and got have the same words and layout
+// and numbers that agree within rel (relative), any two below
+// roundOffFloor being the same.
+func sameWithin(want, got string, rel float64) bool {
 	wl, gl := strings.Split(want, "\n"), strings.Split(got, "\n")
 	if len(wl) != len(gl) {
 		return false
@@ -91,7 +96,7 @@ func sameButRounding(want, got string) bool {
 			if math.Max(math.Abs(a), math.Abs(b)) < roundOffFloor {
 				continue
 			}
-			if math.Abs(a-b) > goldenTol*math.Max(math.Abs(a), math.Abs(b)) {
+			if math.Abs(a-b) > rel*math.Max(math.Abs(a), math.Abs(b)) {
 				return false
 			}
 		}
@@ -140,5 +145,9 @@ func TestSameButRounding(t *testing.T) {
 				t.Errorf("sameButRounding = %v, want %v", got, tc.same)
 			}
 		})
+	}
+	// A tighter tolerance sees the last printed digit.
+	if sameWithin("k  1.337 N/µm\n", "k  1.338 N/µm\n", 1e-9) {
+		t.Error("sameWithin(1.337, 1.338, 1e-9) = true, want false")
 	}
 }

@@ -535,6 +535,9 @@ func TestRoundOffIsNotUplift(t *testing.T) {
 // reactions × 0.5 m (equilibrium of that case). The flat foot springs
 // and a flexible frame do not change this in a small-displacement model.
 func TestTippedCaseReported(t *testing.T) {
+	// sameSolveTol: one case solved twice with the same factorisation
+	// differs by round-off of the solve only.
+	const sameSolveTol = 1e-9
 	const (
 		push, height, depth = 20e3, 0.82, 0.5 // N, m, m: the case below and the demo's plan
 		tol                 = 1e-6            // a contact path found to round-off
@@ -584,7 +587,13 @@ force = [0, "20 kN", 0]
 		for _, got := range rep.Cases {
 			if got.Name == want.Name {
 				found = true
-				assert.Equal(t, want, got, want.Name)
+				// The same solve of the same case; which other cases are
+				// solved beside it may change the order of the arithmetic
+				// (multi-load solves), so round-off is allowed.
+				var wj, gj bytes.Buffer
+				require.NoError(t, writeJSON(&wj, want))
+				require.NoError(t, writeJSON(&gj, got))
+				assert.True(t, sameWithin(wj.String(), gj.String(), sameSolveTol), "case %q:\n%s", want.Name, diff(wj.String(), gj.String()))
 			}
 		}
 		assert.True(t, found, want.Name)
