@@ -27,7 +27,8 @@
 // # Output
 //
 // Text reports are aligned tables, governing numbers first, then
-// warnings (lifted feet, uplift, tipping, overstress, resonance), then
+// warnings (lifted feet, feet held sideways at the point of lifting,
+// uplift, tipping, overstress, resonance), then
 // details, and they end with the cautions. A case under which the stand
 // tips over (no stable set of feet stays in contact) is named first
 // among the warnings and has no results; the other cases stand. ranges
