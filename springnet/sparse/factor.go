@@ -328,6 +328,16 @@ func (f *Factor) allocNumeric() {
 			f.gw = append(f.gw, newGemmWork())
 		}
 	}
+	// Every multiply of a front of m rows and k pivots is at most m×m×k:
+	// size the panels for the largest once, rather than growing them.
+	maxM, maxK := 0, 0
+	for s := 0; s < f.ns; s++ {
+		maxM = max(maxM, f.sptr[s+1]-f.sptr[s])
+		maxK = max(maxK, f.sfirst[s+1]-f.sfirst[s])
+	}
+	for _, w := range f.gw {
+		w.reserve(maxM, maxM, maxK)
+	}
 	f.main.alloc(f.gw)
 	for t, w := range f.workers {
 		w.alloc(f.gw[t : t+1])
