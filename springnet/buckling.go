@@ -178,6 +178,7 @@ type FewerFactorsError struct {
 	Reversed    float64
 }
 
+// Error implements the error interface.
 func (e *FewerFactorsError) Error() string {
 	if e.Found > 0 {
 		return fmt.Sprintf("springnet: buckling: case %q: only %d of the %d load factors asked for are positive", e.Case, e.Found, e.Want)

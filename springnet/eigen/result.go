@@ -163,6 +163,7 @@ type MissedModesError struct {
 	Found     int     // eigenvalues there found by Lanczos
 }
 
+// Error implements the error interface.
 func (e *MissedModesError) Error() string {
 	if e.Count > e.Found {
 		return fmt.Sprintf("eigen: Sturm check: %d eigenvalues lie in [%.6g, %.6g) but only %d were found: modes were missed", e.Count, e.Low, e.High, e.Found)
@@ -180,6 +181,7 @@ type SingularError struct {
 	What  string  // which matrix
 }
 
+// Error implements the error interface.
 func (e *SingularError) Error() string {
 	return fmt.Sprintf("eigen: %s is singular at DOF %d (shift %.6g): a mechanism without mass or stiffness", e.What, e.Col, e.Shift)
 }
@@ -190,6 +192,7 @@ type ConvergenceError struct {
 	Want, Converged, Restarts int
 }
 
+// Error implements the error interface.
 func (e *ConvergenceError) Error() string {
 	return fmt.Sprintf("eigen: only %d of %d eigenpairs converged after %d restarts", e.Converged, e.Want, e.Restarts)
 }
@@ -202,6 +205,7 @@ type ResidualError struct {
 	Tol      float64
 }
 
+// Error implements the error interface.
 func (e *ResidualError) Error() string {
 	return fmt.Sprintf("eigen: mode %d (λ = %.6g): relative residual %.3g exceeds %.3g", e.Mode, e.Value, e.Residual, e.Tol)
 }
@@ -213,6 +217,7 @@ type FewerModesError struct {
 	Want, Found int
 }
 
+// Error implements the error interface.
 func (e *FewerModesError) Error() string {
 	return fmt.Sprintf("eigen: asked for %d modes but the problem has only %d finite ones", e.Want, e.Found)
 }

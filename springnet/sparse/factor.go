@@ -59,6 +59,7 @@ type PivotError struct {
 	Negative bool    // the pivot is clearly negative (matrix indefinite) rather than near zero
 }
 
+// Error implements the error interface.
 func (e *PivotError) Error() string {
 	what := "near-zero"
 	if e.Negative {
