@@ -114,7 +114,7 @@ func TestMaterialAtAndShear(t *testing.T) {
 	// Isotropic elasticity: G = E / (2(1+ν)) (Timoshenko & Goodier, Theory of Elasticity).
 	p := m.At(High)
 	assert.Equal(t, 210e9, p.E)
-	assert.InEpsilon(t, 210e9/2.6, p.G, 1e-12)
+	assert.InEpsilon(t, 210e9/2.6, p.G, 1e-12) // 2(1+0.3) = 2.6; 1e-12: one division, round-off only
 	assert.Equal(t, 1e-3, p.Loss)
 	assert.Equal(t, 7850.0, p.Density)
 	assert.Equal(t, 0.3, p.Poisson)
