@@ -49,10 +49,13 @@ func TestFactorAgainstDense(t *testing.T) {
 		require.True(t, ch.Factorize(dense))
 		var want mat.VecDense
 		require.NoError(t, ch.SolveVecTo(&want, mat.NewVecDense(n, rhs)))
+		// Reference: gonum's dense Cholesky. The diagonal is the off-diagonal
+		// row sum + 1 (strictly dominant, condition small), so the two
+		// backward-stable solves agree to a few hundred ulps: 1e-12 relative.
 		for i := range x {
 			assert.InDelta(t, want.AtVec(i), x[i], 1e-12*(1+abs(want.AtVec(i))))
 		}
-		assert.Less(t, Residual(a, x, rhs), 1e-13)
+		assert.Less(t, Residual(a, x, rhs), residualTol)
 	}
 }
 
