@@ -330,6 +330,8 @@ func TestBeamAngleCantileverUnsymmetricBending(t *testing.T) {
 			sec := sections.Angle{B: tc.b, H: tc.h, T: tk}
 			pr, err := sec.Properties()
 			require.NoError(t, err)
+			// sharpAngle is the hand closed form of two rectangles; round-off only
+			// (Iyz by parallel-axis sums, which cancel a few digits: 1e-9).
 			require.InEpsilon(t, area, pr.A, 1e-12, "the section is the two rectangles")
 			require.InEpsilon(t, iyz, pr.Iyz, 1e-9, "same product of area, same sign")
 			m, tip, _ := beamCantilever(tc.dir, l, springnet.Beam{Material: beamSteel(), Section: sec, Up: tc.up, Roll: tc.roll})

@@ -20,6 +20,7 @@ func TestCheckExcitation(t *testing.T) {
 	ex, err := springnet.Excitations(speeds, 3)
 	require.NoError(t, err)
 	require.Len(t, ex, 6)
+	// 1e-12: one multiply and divide of the hand numbers above, round-off only.
 	assert.InEpsilon(t, 80.0, ex[1].Low, 1e-12)
 	assert.InEpsilon(t, 400.0, ex[1].High, 1e-12)
 	assert.InEpsilon(t, 1450.0*3/60, ex[5].Low, 1e-12)
@@ -47,7 +48,7 @@ func TestCheckExcitation(t *testing.T) {
 		assert.Equal(t, w.mode, got[i].Mode)
 		assert.Equal(t, w.speed, got[i].Excitation.Speed)
 		assert.Equal(t, w.order, got[i].Excitation.Order)
-		assert.InDelta(t, w.sep, got[i].Separation, 1e-12)
+		assert.InDelta(t, w.sep, got[i].Separation, 1e-12) // a ratio of the hand numbers: round-off only
 	}
 
 	for _, tc := range []struct {

@@ -75,7 +75,7 @@ func TestModesSparseAgainstDenseRandom(t *testing.T) {
 				require.Equal(t, count, sp.NumModes())
 				require.Equal(t, count, de.NumModes())
 				for i := 0; i < count; i++ {
-					assert.InEpsilon(t, de.Frequency(i), sp.Frequency(i), 1e-8, "mode %d", i+1)
+					assert.InEpsilon(t, de.Frequency(i), sp.Frequency(i), modeTight, "mode %d", i+1) // dense LAPACK reference
 					assert.False(t, sp.RigidBody(i))
 				}
 				// Invariant: element energy shares of a mode add up to 1.
@@ -83,7 +83,7 @@ func TestModesSparseAgainstDenseRandom(t *testing.T) {
 				for _, e := range sp.ElementEnergiesTo(nil, 0) {
 					sum += e
 				}
-				assert.InEpsilon(t, 1, sum, 1e-12)
+				assert.InEpsilon(t, 1, sum, 1e-12) // shares are parts of one sum: round-off only
 				assert.True(t, sp.Sturm().Checked)
 				assert.True(t, de.Sturm().Checked)
 				assert.Equal(t, count, sp.Sturm().Count)
@@ -123,13 +123,14 @@ func TestModesEffectiveMassSum(t *testing.T) {
 				for i := 0; i < all; i++ {
 					sum += r.EffectiveMass(i, d)
 				}
+				// 1e-9: sums over all 36 modes of products of eigenvectors; round-off only.
 				assert.InEpsilon(t, r.TotalMass(d), sum, 1e-9, "%v", d)
 				assert.InEpsilon(t, 1, r.CumulativeParticipation(all-1, d), 1e-9, "%v", d)
 			}
 			if kind == springnet.Lumped {
 				// Lumped: half of the first element sits on the clamp.
 				want := rhoA*(l-l/n/2) + tip
-				assert.InEpsilon(t, want, r.TotalMass(springnet.UX), 1e-12)
+				assert.InEpsilon(t, want, r.TotalMass(springnet.UX), 1e-12) // a sum of a few lumped masses: round-off only
 				assert.InEpsilon(t, want, r.TotalMass(springnet.UZ), 1e-12)
 			}
 		})

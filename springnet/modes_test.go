@@ -139,6 +139,7 @@ func TestModesBeamBending(t *testing.T) {
 			// (modal strain energy method with a single loss factor).
 			for i := 0; i < 3; i++ {
 				z := r.DampingRatio(i)
+				// 1e-12: with one material the weighted mean is that one value; round-off only.
 				assert.InEpsilon(t, mat.Loss.Low/2, z.Low, 1e-12)
 				assert.InEpsilon(t, mat.Loss.Nominal/2, z.Nominal, 1e-12)
 				assert.InEpsilon(t, mat.Loss.High/2, z.High, 1e-12)
@@ -273,6 +274,7 @@ func TestModesRigidTopAgainstGonum(t *testing.T) {
 				ug := r.Shape(i, g)
 				um := r.Shape(i, corner)
 				want := ug.Translation().Add(ug.Rotation().Cross(springnet.Vec{X: 0.4, Y: 0.3, Z: 0.9}))
+				// 1e-12 (absolute, unit modal mass): the mount is slaved rigidly, round-off only.
 				assert.InDelta(t, want.X, um.UX, 1e-12)
 				assert.InDelta(t, want.Y, um.UY, 1e-12)
 				assert.InDelta(t, want.Z, um.UZ, 1e-12)
@@ -304,6 +306,7 @@ func TestMachineMasses(t *testing.T) {
 	require.Len(t, ms, 1)
 	// Solid cuboid: Jx = m(b² + c²)/12 (Meriam & Kraige, Dynamics, table of
 	// mass moments of inertia; the formula as the task states it).
+	// 1e-12: the same formula evaluated once, round-off only.
 	assert.InEpsilon(t, 600*(0.25+0.64)/12, ms[0].Inertia.X, 1e-12)
 	assert.InEpsilon(t, 600*(1+0.64)/12, ms[0].Inertia.Y, 1e-12)
 	assert.InEpsilon(t, 600*(1+0.25)/12, ms[0].Inertia.Z, 1e-12)

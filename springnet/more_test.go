@@ -183,6 +183,7 @@ func TestDifferentialDeflection(t *testing.T) {
 	th := cr.At(g).Rotation()
 	want := th.Cross(springnet.Vec{X: 0.7, Y: 0.1})
 	got := cr.Differential(a, b)
+	// 1e-12 m: rigid-top kinematics of one solve, round-off only (NotZero below keeps it from passing on zeros).
 	assert.InDelta(t, want.Z, got.UZ, 1e-12)
 	assert.InDelta(t, want.X, got.UX, 1e-12)
 	assert.NotZero(t, got.UZ)

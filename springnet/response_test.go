@@ -59,10 +59,10 @@ func TestResponseSingleDOF(t *testing.T) {
 			f, mr, err := springnet.Response(m, p, p, &springnet.ResponseSettings{Low: fn / 10, High: fn * 3, Points: 301})
 			require.NoError(t, err)
 			require.Equal(t, 1, mr.NumModes())
-			assert.InEpsilon(t, zeta, mr.DampingRatio(0).Nominal, 1e-12)
-			assert.InEpsilon(t, 1/(2*zeta*k), cmplx.Abs(f.At(fn)), 1e-9)
-			assert.InEpsilon(t, 1/k, real(f.At(1e-6*fn)), 1e-9)
-			assert.InDelta(t, -math.Pi/2, cmplx.Phase(f.At(fn)), 1e-9)
+			assert.InEpsilon(t, zeta, mr.DampingRatio(0).Nominal, 1e-12) // ζ = η/2 of one material: one divide
+			assert.InEpsilon(t, 1/(2*zeta*k), cmplx.Abs(f.At(fn)), frfTol)
+			assert.InEpsilon(t, 1/k, real(f.At(1e-6*fn)), frfTol) // at r = 1e-6 the O(r²) term is 1e-12, under frfTol
+			assert.InDelta(t, -math.Pi/2, cmplx.Phase(f.At(fn)), frfTol)
 			tr := f.Truncation()
 			assert.True(t, tr.Residual)
 			assert.InDelta(t, 0, tr.ResidualCompliance, 1e-12/k, "one mode is the whole response")
@@ -161,6 +161,7 @@ func TestResponseTwoDOFDirect(t *testing.T) {
 		x1, x2 := phi.At(0, r), phi.At(1, r)
 		u1, u2 := k1*x1*x1/2, k2*(x2-x1)*(x2-x1)/2
 		zeta[r] = (eta1*u1 + eta2*u2) / (u1 + u2) / 2
+		// 1e-10: a 2×2 eigenproblem solved two ways (gonum dense vs the library): round-off only.
 		assert.InEpsilon(t, zeta[r], mr.DampingRatio(r).Nominal, 1e-10)
 		assert.InEpsilon(t, math.Sqrt(w2[r])/(2*math.Pi), mr.Frequency(r), 1e-10)
 	}
@@ -230,7 +231,7 @@ func TestResponseResidualFlexibility(t *testing.T) {
 	st, err := springnet.Static(mm, nil)
 	require.NoError(t, err)
 	cs := st.Displacement(nodes2[len(nodes2)-1]).UZ
-	assert.InEpsilon(t, cs, real(withRes.At(1e-9*f1)), 1e-8)
+	assert.InEpsilon(t, cs, real(withRes.At(1e-9*f1)), 1e-8) // static solve vs modal sum + residual flexibility: equal in exact arithmetic, 1e-8 for round-off of two solves
 
 	hz := 0.3 * f1
 	eRes := cmplx.Abs(withRes.At(hz) - full.At(hz))

@@ -59,7 +59,7 @@ func TestPrattTruss(t *testing.T) {
 	for e, f := range want {
 		assert.InDelta(t, f, cr.Force(e).Axial, closeTol*p, m.ElementName(e))
 	}
-	assert.InDelta(t, 15e3, cr.Reaction(L[0]).FZ, closeTol*p)
+	assert.InDelta(t, 15e3, cr.Reaction(L[0]).FZ, closeTol*p) // 3P/2 by symmetry (hand calculation above)
 	assert.InDelta(t, 15e3, cr.Reaction(L[4]).FZ, closeTol*p)
 	assert.InDelta(t, 0, cr.Reaction(L[0]).FX, closeTol*p)
 	// Every node is held out of plane, so all eight report; vertical
@@ -135,12 +135,12 @@ func TestComplianceReciprocity(t *testing.T) {
 				if i == j {
 					want = 1
 				}
-				assert.InDelta(t, want, s, 1e-8)
+				assert.InDelta(t, want, s, 1e-8) // K·C = I: round-off of a 6×6 inverse
 			}
 		}
 		kp, dirs := ps.Principal()
 		for i := range kp {
-			assert.InEpsilon(t, kp[i], ps.Along(dirs[i]), 1e-9)
+			assert.InEpsilon(t, kp[i], ps.Along(dirs[i]), closeTol) // stiffness along a principal direction is that principal value (eigen-decomposition)
 		}
 		assert.LessOrEqual(t, kp[0], kp[1])
 		assert.LessOrEqual(t, kp[1], kp[2])
@@ -221,7 +221,7 @@ func TestUnits(t *testing.T) {
 	// (exact definitions, 1959 international yard and pound agreement).
 	assert.InEpsilon(t, 175.126835246476, springnet.FromLbfPerInch(1), 1e-14)
 	assert.InEpsilon(t, 1.0, springnet.LbfPerInch(springnet.FromLbfPerInch(1)), 1e-15)
-	assert.InEpsilon(t, 2.34e3, springnet.NPerMicron(2.34e9), 1e-15)
+	assert.InEpsilon(t, 2.34e3, springnet.NPerMicron(2.34e9), 1e-15) // 1 µm = 1e-6 m by definition; one multiply
 }
 
 func TestLumpedMassTotal(t *testing.T) {
@@ -263,7 +263,7 @@ func TestLumpedMassTotal(t *testing.T) {
 			got += f[i]
 		}
 	}
-	assert.InEpsilon(t, want, got, 1e-12)
+	assert.InEpsilon(t, want, got, 1e-12) // a sum of a few products: round-off only
 	var sb strings.Builder
 	require.NoError(t, sys.WriteK(&sb))
 	assert.True(t, strings.HasPrefix(sb.String(), "%%MatrixMarket matrix coordinate real symmetric\n"))
