@@ -359,7 +359,7 @@ func TestBucklingSwayUnderHeavyMachine(t *testing.T) {
 	assert.InEpsilon(t, want, res.Factor(0), eulerTol)
 	sh := res.Shape(0, g)
 	assert.InDelta(t, 1, sh.UX, 1e-12, "sway along X, normalised to 1") // normalisation: exact up to one divide
-	assert.InDelta(t, 0, sh.UY, 1e-9)                                   // symmetric stand: no Y sway in the X mode; round-off of the eigen solve
+	assert.InDelta(t, 0, sh.UY, 1e-9)                                   // X and Y sway decouple (section axes along X, Y): round-off of the eigen solve
 	// The second mode sways along Y about the strong axis: 4× the load.
 	assert.InEpsilon(t, 4*want, res.Factor(1), eulerTol)
 	pts := res.MemberShape(nil, 0, 7, 5, 1)

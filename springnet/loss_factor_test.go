@@ -41,8 +41,8 @@ func TestLossFactorComposite(t *testing.T) {
 	const tol = 1e-9
 	for _, e := range []springnet.ElementID{grouted, bar} {
 		got := m.LossFactor(e)
-		assert.Equal(t, 0.0005, got.Low)
-		assert.Equal(t, 0.04, got.High)
+		assert.Equal(t, 0.0005, got.Low) // least Low of the parts: the steel's input above
+		assert.Equal(t, 0.04, got.High)  // greatest High of the parts: the grout's input above
 		assert.InEpsilon(t, nominal, got.Nominal, tol)
 	}
 	// Dry sand stores no strain energy: the shell's loss factor alone.

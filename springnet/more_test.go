@@ -162,6 +162,7 @@ func TestCombinationIsSuperposition(t *testing.T) {
 	require.NoError(t, err)
 	for _, n := range r.nodes {
 		ua, ub, uc := res.Case(ca).Displacement(n), res.Case(cb).Displacement(n), res.Case(combo).Displacement(n)
+		// 1e-9 relative (with a 1e-18 floor for zeros): superposition is exact, round-off only.
 		assert.InDelta(t, 1.35*ua.UX+1.5*ub.UX, uc.UX, 1e-9*(math.Abs(uc.UX)+1e-9))
 		assert.InDelta(t, 1.35*ua.RZ+1.5*ub.RZ, uc.RZ, 1e-9*(math.Abs(uc.RZ)+1e-9))
 	}
