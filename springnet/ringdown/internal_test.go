@@ -81,6 +81,8 @@ func TestTruncationWidthAgainstDFT(t *testing.T) {
 			}
 		}
 		x := (lo + hi) / 2 * 2 * math.Pi / sig
+		// 2e-3: the sampled record ends on a whole sample, so its L = σT is off
+		// by up to σ/fs = 1.5e-3 from −ln r (hand calculation).
 		assert.InEpsilon(t, x, truncationWidth(r), 2e-3, "r = %g", r)
 	}
 	assert.Equal(t, 1.0, truncationWidth(0), "no truncation: the Lorentzian")
