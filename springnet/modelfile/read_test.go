@@ -220,7 +220,7 @@ func TestDemoValues(t *testing.T) {
 	s235, err := materials.Lookup("steel S235")
 	require.NoError(t, err)
 	assert.Equal(t, s235.E, beam.Material.E)
-	assert.Equal(t, materials.Range{Low: 0.001, Nominal: 0.002, High: 0.004}, beam.Material.Loss)
+	assert.Equal(t, materials.Range{Low: 0.001, Nominal: 0.002, High: 0.004}, beam.Material.Loss) // the demo file's loss-factor = [0.001, 0.002, 0.004]
 	// The mass centre is given in global coordinates; the model holds it
 	// as an offset from the top's centroid (600, 250, 800) mm.
 	// Member checks: theoretical factors, the brace's given as 1.
@@ -524,10 +524,10 @@ fix = ["y", "z", "rx", "ry"]
 	assert.InDelta(t, 1.0, at.Z, tol)
 	s, ok := f.Model.SpringOf(f.ElementIDs["pad"])
 	require.True(t, ok)
-	assert.Equal(t, 2.5e6, s.Axial)
+	assert.Equal(t, 2.5e6, s.Axial) // "2.5 N/um" above = 2.5e6 N/m by hand
 	shoe, ok := f.Model.FootOf(f.ElementIDs["shoe"])
 	require.True(t, ok)
-	assert.Equal(t, 3e3, shoe.K.RZ)
+	assert.Equal(t, 3e3, shoe.K.RZ) // "3 kN*m/rad" above = 3e3 N·m/rad by hand
 	// 1 lbf/in = 4.4482216152605 N / 0.0254 m = 175.126835... N/m (NIST SP 811 factors).
 	assert.InEpsilon(t, 10*4.4482216152605/0.0254, shoe.K.X, 1e-14)
 	assert.Equal(t, springnet.UY|springnet.UZ|springnet.RX|springnet.RY, f.Model.Fixed(b))
