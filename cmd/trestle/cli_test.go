@@ -229,11 +229,14 @@ func TestRingdown(t *testing.T) {
 	assert.InEpsilon(t, zeta, rep.Ratio.Value, 0.01)
 	// Textbook relations (Inman, Engineering Vibration, §1.6; loss factor
 	// η = 2ζ and Q = 1/(2ζ) near resonance).
+	// These are exact identities and JSON carries float64 exactly, so
+	// exactTol is round-off only.
+	const exactTol = 1e-12
 	z := rep.Ratio.Value
-	assert.InEpsilon(t, rep.DampedFrequency.Value/math.Sqrt(1-z*z), rep.NaturalFrequency.Value, 1e-9)
-	assert.InEpsilon(t, 2*math.Pi*z/math.Sqrt(1-z*z), rep.LogDecrement.Value, 1e-6)
-	assert.InEpsilon(t, 2*z, rep.LossFactor.Value, 1e-6)
-	assert.InEpsilon(t, 1/(2*z), rep.Q.Value, 1e-6)
+	assert.InEpsilon(t, rep.DampedFrequency.Value/math.Sqrt(1-z*z), rep.NaturalFrequency.Value, exactTol)
+	assert.InEpsilon(t, 2*math.Pi*z/math.Sqrt(1-z*z), rep.LogDecrement.Value, exactTol)
+	assert.InEpsilon(t, 2*z, rep.LossFactor.Value, exactTol)
+	assert.InEpsilon(t, 1/(2*z), rep.Q.Value, exactTol)
 	assert.True(t, rep.Agree)
 	assert.Len(t, rep.Methods, 4)
 	assert.Equal(t, pic, rep.Picture)
@@ -293,10 +296,13 @@ func TestExport(t *testing.T) {
 	// are free (its rotations are held), so K is 3 × 3 and diagonal with
 	// 4·12·EIz/L³ (X), 4·12·EIy/L³ (Y) and 4·EA/L (Z); see
 	// TestFourLegsHandCheck.
+	// Leg data from testdata/four-legs.toml; 1e-12: sums of four equal
+	// exact terms written in shortest round-trip form, round-off only.
+	const ea, eiy, eiz, l = 2e8, 1e4, 2e4, 1.0
 	require.Equal(t, 3, k.N())
-	assert.InEpsilon(t, 9.6e5, k.At(0, 0), 1e-12)
-	assert.InEpsilon(t, 4.8e5, k.At(1, 1), 1e-12)
-	assert.InEpsilon(t, 8e8, k.At(2, 2), 1e-12)
+	assert.InEpsilon(t, 4*12*eiz/(l*l*l), k.At(0, 0), 1e-12) // 9.6e5 N/m
+	assert.InEpsilon(t, 4*12*eiy/(l*l*l), k.At(1, 1), 1e-12) // 4.8e5 N/m
+	assert.InEpsilon(t, 4*ea/l, k.At(2, 2), 1e-12)           // 8e8 N/m
 	assert.Equal(t, []string{"1", "group", "top", "UX"}, rows[1][:4])
 	for _, name := range []string{"M.mtx", "F-1-press.mtx", "F-2-push.mtx"} {
 		_, err := os.Stat(filepath.Join(dir, name))

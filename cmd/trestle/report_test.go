@@ -89,12 +89,12 @@ func TestFourLegsHandCheck(t *testing.T) {
 	// (Przemieniecki, Theory of Matrix Structural Analysis, §15; 1.3 %
 	// above Euler's π²·EI/L² for a fixed–guided column with sway).
 	require.NotNil(t, rep.Governing.BucklingFactor)
-	assert.InEpsilon(t, 10*EI/(L*L)/(press/4), *rep.Governing.BucklingFactor, 1e-6)
-	assert.InEpsilon(t, math.Pi*math.Pi*EI/(L*L)/(press/4), *rep.Governing.BucklingFactor, 0.02)
+	assert.InEpsilon(t, 10*EI/(L*L)/(press/4), *rep.Governing.BucklingFactor, 1e-9)              // eigenvalue of a converged symmetric solve: round-off level
+	assert.InEpsilon(t, math.Pi*math.Pi*EI/(L*L)/(press/4), *rep.Governing.BucklingFactor, 0.02) // 2 %: covers the 1.3 % one-element excess stated above
 	// Member Euler check without sway, fixed–fixed, K = 0.65 (AISC 360
 	// Commentary Table C-A-7.1, recommended design value).
 	require.NotNil(t, rep.Governing.EulerMargin)
-	assert.InEpsilon(t, math.Pi*math.Pi*EI/math.Pow(0.65*L, 2)/(press/4), *rep.Governing.EulerMargin, 1e-6)
+	assert.InEpsilon(t, math.Pi*math.Pi*EI/math.Pow(0.65*L, 2)/(press/4), *rep.Governing.EulerMargin, 1e-9) // a formula on a direct solve's axial force: round-off
 	// Equilibrium: reactions balance the applied load.
 	assert.InEpsilon(t, press, pc.Equilibrium.ReactionsN[2], tol)
 	assert.Less(t, pc.Equilibrium.ForceError, 1e-12)
@@ -267,7 +267,7 @@ func TestDemoEndToEnd(t *testing.T) {
 	for _, f := range rep.Cases[0].Feet {
 		sum += f.FZN
 	}
-	assert.InEpsilon(t, -rep.Cases[0].Equilibrium.AppliedN[2], sum, 1e-9)
+	assert.InEpsilon(t, -rep.Cases[0].Equilibrium.AppliedN[2], sum, 1e-9) // a sum of reactions from a direct solve: round-off
 
 	// --picture draws the case with the largest displacement beside the
 	// report, leaving standard output to the report.
@@ -291,7 +291,7 @@ func TestTiedSoftestDirection(t *testing.T) {
 	require.Len(t, rep.Mounts, 1)
 	mt := rep.Mounts[0]
 	assert.True(t, mt.SoftestTied)
-	assert.InEpsilon(t, mt.XNPerM, mt.YNPerM, 1e-9)
+	assert.InEpsilon(t, mt.XNPerM, mt.YNPerM, 1e-9) // equal by symmetry; round-off only
 	assert.Equal(t, [3]float64{1, 0, 0}, mt.PrincipalDirection[0])
 	assert.Equal(t, [3]float64{0, 1, 0}, mt.PrincipalDirection[1])
 	text := trestle(t, "", "analyse", "testdata/tall-square.toml")
@@ -313,7 +313,8 @@ func TestTippingMarginOrWarning(t *testing.T) {
 	tp := rep.Cases[0].Tipping
 	if tp.Found {
 		require.NotNil(t, rep.Governing.TippingFactor)
-		assert.InEpsilon(t, want, *rep.Governing.TippingFactor, 1e-6)
+		// The library finds λ in closed form within a contact set: round-off only.
+		assert.InEpsilon(t, want, *rep.Governing.TippingFactor, 1e-9)
 		return
 	}
 	// Without an answer from the library the report must say so, not
