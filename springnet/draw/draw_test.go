@@ -172,8 +172,8 @@ func TestPNGDecodes(t *testing.T) {
 			}
 		}
 	}
-	// 500 of the 320 × 225 = 72 000 sampled pixels (0.7 %): more than a stray
-	// border or label could make; a threshold, not derived.
+	// 500 of the 320 × 225 = 72 000 sampled pixels (0.7 %): more than a
+	// speck; a chosen threshold, not derived.
 	assert.Greater(t, nonWhite, 500)
 }
 
