@@ -154,7 +154,7 @@ func TestCatalogueRulesOfThumb(t *testing.T) {
 		t.Run(m.Name, func(t *testing.T) {
 			switch m.Kind {
 			case Steel, Stainless:
-				assert.InEpsilon(t, 200*gpa, m.E.Nominal, 0.06, "steel ≈ 200 GPa, common practice")
+				assert.InEpsilon(t, 200*gpa, m.E.Nominal, 0.06, "steel ≈ 200 GPa, common practice") // 6 %: spans 193 GPa stainless to 210 GPa EN 1993
 				assert.InDelta(t, 7900, m.Density, 100, "steel ≈ 7.85–8.0 t/m³, common practice")
 			case Concrete:
 				if !strings.HasPrefix(m.Name, "concrete ") {
@@ -166,9 +166,9 @@ func TestCatalogueRulesOfThumb(t *testing.T) {
 				assert.True(t, m.E.Low <= 10*gpa && m.E.High >= 10*gpa, "wood along the grain ≈ 10 GPa, common practice")
 				assert.Less(t, m.ShearModulus(Nominal), m.E.Nominal/10, "wood: G ≪ E (orthotropic), common practice")
 			case Aluminium:
-				assert.InEpsilon(t, 70*gpa, m.E.Nominal, 0.03, "aluminium ≈ 70 GPa, EN 1999-1-1 3.2.5")
+				assert.InEpsilon(t, 70*gpa, m.E.Nominal, 0.03, "aluminium ≈ 70 GPa, EN 1999-1-1 3.2.5") // 3 %: the ASM 68.9 GPa is 1.6 % below
 			case Elastomer:
-				assert.InEpsilon(t, 3, m.E.Nominal/m.ShearModulus(Nominal), 0.02, "E ≈ 3G for ν → 0.5")
+				assert.InEpsilon(t, 3, m.E.Nominal/m.ShearModulus(Nominal), 0.02, "E ≈ 3G for ν → 0.5") // 2 %: 2(1 + 0.49) = 2.98 is 0.7 % off
 			case Fill:
 				assert.True(t, m.MassOnly)
 			}
