@@ -217,9 +217,8 @@ func modes(t *testing.T, s *system) []float64 {
 // TestCantileverFrequencies: the clamped-free beam with 20 elements against
 // ω = (βL)²·√(EI/(m·L⁴)), βL = 1.87510407 and 4.69409113 (Blevins, Formulas for
 // Natural Frequency and Mode Shape, Table 8-1, clamped-free; digits past
-// 1.8751 and 4.6941 from memory); the two
-// bending planes give the first two modes here (EIz < EIy), the second
-// EIz mode the third. Within 1 % (task brief); the consistent matrix is
+// 1.8751 and 4.6941 from memory); the two bending planes give the first two
+// modes here (EIz < EIy), the second EIz mode the third. Within 1 % (task brief); the consistent matrix is
 // far closer.
 func TestCantileverFrequencies(t *testing.T) {
 	const l, n, m, mj = 2.0, 20, 10.0, 0.01
