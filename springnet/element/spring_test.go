@@ -61,7 +61,7 @@ func TestSpringRigidMotion(t *testing.T) {
 	k := element.SpringStiffness(element.Spring6{1e6, 2e6, 3e6, 4e3, 5e3, 6e3})
 	assert.True(t, isSym(dense12(k)))
 	// Six independent directions: rank 6 (each direction one spring).
-	assert.Equal(t, 6, rank(t, dense12(k), 1e-12))
+	assert.Equal(t, 6, rank(t, dense12(k), 1e-12)) // smallest/largest = 4e3/3e6 ≫ 1e-12; zeros would be round-off
 	p := element.Vec3{0.4, 0.1, -0.3}
 	for _, r := range rigidBasis(p, p) {
 		f := mul12(k, r)
@@ -118,7 +118,7 @@ func TestSpringInAxes(t *testing.T) {
 	}
 	u := solve6(t, g, fv)
 	want := load / ks[1]
-	assertVec(t, element.Vec3{want * f.Ey[0], want * f.Ey[1], want * f.Ey[2]}, element.Vec3{u[0], u[1], u[2]}, 1e-9*want, "ground spring")
+	assertVec(t, element.Vec3{want * f.Ey[0], want * f.Ey[1], want * f.Ey[2]}, element.Vec3{u[0], u[1], u[2]}, 1e-9*want, "ground spring") // 1e-9 relative: a 6×6 solve, round-off only
 	// Two-node spring in axes: extension along Ez recovered as k₃·δ.
 	const d = 1e-3
 	ub := element.Vec6{d * f.Ez[0], d * f.Ez[1], d * f.Ez[2]}
