@@ -45,9 +45,9 @@ func TestBarStiffnessInvariants(t *testing.T) {
 			for c := range 6 {
 				s += k[r][c] * u[c]
 			}
-			assert.InDelta(t, 0, s, 1e-9*ea/f.L*1e-3, "rigid motion %d row %d", i, r)
+			assert.InDelta(t, 0, s, 1e-9*ea/f.L*1e-3, "rigid motion %d row %d", i, r) // 1e-9 of the force scale EA/L·θ (θ = 1e-3): round-off
 		}
-		assert.InDelta(t, 0, element.BarAxialForce(f, ea, element.Vec3(ua[:3]), element.Vec3(ub[:3])), 1e-9*ea*1e-3)
+		assert.InDelta(t, 0, element.BarAxialForce(f, ea, element.Vec3(ua[:3]), element.Vec3(ub[:3])), 1e-9*ea*1e-3) // as above
 	}
 	// Stretching by δ along the axis: N = EA·δ/L, tension positive (Hooke's law).
 	const delta = 1e-4
@@ -113,7 +113,7 @@ func TestBarGeometricStiffness(t *testing.T) {
 			for c := range 6 {
 				s += kg[r][c] * u[c]
 			}
-			assert.InDelta(t, 0, s, 1e-9*n/f.L)
+			assert.InDelta(t, 0, s, 1e-9*n/f.L) // 1e-9 of the scale N/L: round-off
 		}
 	}
 }

@@ -71,7 +71,7 @@ func TestNewFrameOrthonormal(t *testing.T) {
 		assert.InDelta(t, 0, dot3(f.Ey, f.Ez), axisTol)
 		assertVec(t, f.Ez, cross3(f.Ex, f.Ey), axisTol, "right-handed")
 		assert.Positive(t, dot3(f.Ez, up), "Ez leans towards up")
-		assert.InDelta(t, 0, dot3(f.Ey, up), 1e-12*math.Sqrt(sq(up)), "up lies in the x–z plane")
+		assert.InDelta(t, 0, dot3(f.Ey, up), 1e-12*math.Sqrt(sq(up)), "up lies in the x–z plane") // round-off of unit vectors
 		v := element.Vec3{rng.NormFloat64(), rng.NormFloat64(), rng.NormFloat64()}
 		assertVec(t, v, f.ToGlobal(f.ToLocal(v)), axisTol, "round trip")
 	}

@@ -124,13 +124,13 @@ func TestSpringInAxes(t *testing.T) {
 	ub := element.Vec6{d * f.Ez[0], d * f.Ez[1], d * f.Ez[2]}
 	fr := element.SpringForceInAxes(r, ks, element.Vec6{}, ub)
 	assert.InEpsilon(t, ks[2]*d, fr[2], relTol)
-	assert.InDelta(t, 0, fr[0], 1e-9*ks[2]*d)
+	assert.InDelta(t, 0, fr[0], 1e-9*ks[2]*d) // 1e-9 of the axial force: round-off of the axes
 	// Rigid motions of coincident ends: no force.
 	kk := element.SpringStiffnessInAxes(r, ks)
 	for _, rb := range rigidBasis(f.A, f.A) {
 		fr := mul12(kk, rb)
 		for i := range 12 {
-			assert.InDelta(t, 0, fr[i], 1e-9*ks[2])
+			assert.InDelta(t, 0, fr[i], 1e-9*ks[2]) // unit rigid motions strain nothing: round-off against k₃
 		}
 	}
 }
