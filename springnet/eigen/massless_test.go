@@ -48,7 +48,7 @@ func TestMasslessCondensation(t *testing.T) {
 		// ones, so each massless node sits midway between its neighbours.
 		v := res.Vector(j - 1)
 		for i := 2; i < N; i += 2 {
-			assert.InDelta(t, 0.5*(v[i-1]+v[i+1]), v[i], 1e-8*math.Abs(v[i-1]-v[i+1])+1e-12) // eigenvector accuracy of an iterative solve (1e-8 of the local slope, 1e-12 floor), not round-off
+			assert.InDelta(t, 0.5*(v[i-1]+v[i+1]), v[i], 1e-8*math.Abs(v[i-1]-v[i+1])+1e-12) // 1e-8 of the local slope, 1e-12 floor where it vanishes: a generous allowance over round-off
 		}
 	}
 	assertMOrthonormal(t, res, M)
