@@ -275,6 +275,24 @@ func TestGenerateThenAnalyse(t *testing.T) {
 	data, err := os.ReadFile(out)
 	require.NoError(t, err)
 	assert.Equal(t, string(data), s.stdout)
+
+	// A second generate to the same file would lose the user's edits: it is
+	// refused and the file stays as it was, unless --replace is given.
+	edited := append(data, []byte("# my edit\n")...)
+	require.NoError(t, os.WriteFile(out, edited, 0o644))
+	again := []string{"generate", "--legs", "2x2", "--width", "1m", "--depth", "1m", "--height", "1m",
+		"--section", "square 40 mm", "--out", out}
+	g := trestle(t, "", again...)
+	require.Error(t, g.err)
+	assert.Contains(t, g.err.Error(), "--replace")
+	kept, err := os.ReadFile(out)
+	require.NoError(t, err)
+	assert.Equal(t, string(edited), string(kept), "the edited file is untouched")
+	g = trestle(t, "", append(again, "--replace")...)
+	require.NoError(t, g.err)
+	replaced, err := os.ReadFile(out)
+	require.NoError(t, err)
+	assert.NotContains(t, string(replaced), "# my edit")
 }
 
 func TestExport(t *testing.T) {

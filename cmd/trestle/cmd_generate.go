@@ -46,8 +46,12 @@ trestle generate --kind piers --legs 2x2 --width 1.5m --depth 0.8m --height 0.6m
 	topLoad := fl.String("top-load", "", "downward force at the centre of the top, as its own load case")
 	title := fl.String("title", "", "title written into the file")
 	out := fl.String("out", "", "model `file` to write; default standard output")
+	replace := fl.Bool("replace", false, "overwrite --out if it exists (it may hold your edits)")
 	if _, err := fl.parseWant(e.args, 0, 0); err != nil {
 		return handled(err)
+	}
+	if err := checkNewFile(*out, *replace); err != nil {
+		return err
 	}
 	u, err := parseUnits(*units)
 	if err != nil {

@@ -45,7 +45,9 @@
 // An input is never overwritten: an output path that names an input is
 // refused. Outputs (pictures, model files, matrices, CSV) are written to a
 // temporary file in the same folder and renamed into place, so a failed
-// run leaves any earlier file as it was.
+// run leaves any earlier file as it was. `generate` refuses to write over
+// an existing model file (it may hold the user's edits) unless given
+// --replace.
 //
 // # Errors
 //

@@ -47,6 +47,19 @@ func displayName(name string) string {
 	return name
 }
 
+// checkNewFile returns an error if path names an existing file and replace
+// is false: a model file the user may have edited is never overwritten
+// without being asked to.
+func checkNewFile(path string, replace bool) error {
+	if path == "" || path == "-" || replace {
+		return nil
+	}
+	if _, err := os.Stat(path); err == nil {
+		return fmt.Errorf("%s exists and may hold your edits; choose another --out, or give --replace to overwrite it", path)
+	}
+	return nil
+}
+
 // checkNotInput returns an error if out names the same file as any of the
 // inputs (by path or, where both exist, by identity). An input is never
 // overwritten.
