@@ -435,3 +435,21 @@ func TestRingdownMaterialIntoModel(t *testing.T) {
 	// The entry is written to three significant figures.
 	assert.InEpsilon(t, rep.LossFactor.Value, modes.Modes.Modes[0].LossFactor[1], 5e-3)
 }
+
+// A name or spec typed without quotes reads as the quoted one: the words are
+// joined with spaces.
+func TestUnquotedWords(t *testing.T) {
+	for _, tc := range []struct{ name, quoted string }{
+		{"sections", "square-tube 50x3 mm"},
+		{"materials", "steel S235"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			q := trestle(t, "", tc.name, tc.quoted)
+			require.NoError(t, q.err)
+			u := trestle(t, "", append([]string{tc.name}, strings.Fields(tc.quoted)...)...)
+			require.NoError(t, u.err)
+			assert.Equal(t, q.stdout, u.stdout)
+			assert.Contains(t, u.stdout, tc.quoted)
+		})
+	}
+}

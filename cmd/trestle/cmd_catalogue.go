@@ -3,6 +3,7 @@ package main
 import (
 	"fmt"
 	"io"
+	"strings"
 
 	"github.com/trestle-go/trestle/materials"
 	"github.com/trestle-go/trestle/sections"
@@ -30,13 +31,13 @@ source of every figure.`,
 		"trestle materials\ntrestle materials --units us\ntrestle materials \"concrete C25/30\"", e)
 	var of outputFlags
 	of.add(fl)
-	pos, u, err := fl.parseReport(e.args, 0, 1, &of)
+	pos, u, err := fl.parseReport(e.args, 0, maxWords, &of)
 	if err != nil {
 		return handled(err)
 	}
 	var list []materials.Material
-	if len(pos) == 1 {
-		m, err := materials.Lookup(pos[0])
+	if len(pos) > 0 {
+		m, err := materials.Lookup(strings.Join(pos, " "))
 		if err != nil {
 			return err
 		}
@@ -46,7 +47,7 @@ source of every figure.`,
 	}
 	rep := MaterialsReport{Schema: schemaMaterial}
 	for _, m := range list {
-		rep.Materials = append(rep.Materials, materialReport(m, len(pos) == 1))
+		rep.Materials = append(rep.Materials, materialReport(m, len(pos) > 0))
 	}
 	if of.json {
 		return writeJSON(e.stdout, rep)
@@ -106,6 +107,11 @@ func writeMaterials(w io.Writer, r MaterialsReport, u unitSystem) {
 	fmt.Fprintf(w, "\nUse a name in a model file (material = \"steel S235\"), or run trestle materials NAME for the sources.\n")
 }
 
+// maxWords bounds the words of a material name or section spec given
+// without quotes (trestle sections square-tube 50x3 mm); they are joined
+// with spaces.
+const maxWords = 32
+
 func runSections(e env) error {
 	fl := newFlags("sections", "trestle sections [flags] [SPEC]",
 		`Lists the section shapes with an example spec each. With SPEC (quote it),
@@ -114,7 +120,7 @@ shear areas, section moduli and radii of gyration.`,
 		"trestle sections\ntrestle sections \"square-tube 50x3 mm\"\ntrestle sections --units us \"pipe 2in sch40\"", e)
 	var of outputFlags
 	of.add(fl)
-	pos, u, err := fl.parseReport(e.args, 0, 1, &of)
+	pos, u, err := fl.parseReport(e.args, 0, maxWords, &of)
 	if err != nil {
 		return handled(err)
 	}
@@ -136,7 +142,7 @@ shear areas, section moduli and radii of gyration.`,
 		fmt.Fprintf(e.stdout, "\nRun trestle sections \"SPEC\" for the properties of one section.\n")
 		return nil
 	}
-	sec, err := sections.Parse(pos[0])
+	sec, err := sections.Parse(strings.Join(pos, " "))
 	if err != nil {
 		return err
 	}
