@@ -114,7 +114,7 @@ const maxWords = 32
 
 func runSections(e env) error {
 	fl := newFlags("sections", "trestle sections [flags] [SPEC]",
-		`Lists the section shapes with an example spec each. With SPEC (quote it),
+		`Lists the section shapes with an example spec each. With SPEC (quotes optional),
 prints the section's properties: area, second moments, torsion constant,
 shear areas, section moduli and radii of gyration.`,
 		"trestle sections\ntrestle sections \"square-tube 50x3 mm\"\ntrestle sections --units us \"pipe 2in sch40\"", e)
