@@ -32,7 +32,8 @@ func freeDecay(zeta, w, t float64) (x, v float64) {
 func TestDampingAgainstFreeDecay(t *testing.T) {
 	const w = 2 * math.Pi * 7.3 // any natural frequency [rad/s]
 	const m, tol = 1.0, 1e-10   // tol: round-off in exp/cos over one period
-	for _, zeta := range []float64{1e-4, 0.003, 0.02, 0.1, 0.3, 0.7} {
+	const deltaTol = 1e-12      // δ and ζ(δ): a log and a sqrt of the same round-off, no energy sums
+	for _, zeta := range []float64{1e-4, 0.003, 0.02, 0.1, 0.2, 0.3, 0.5, 0.7} {
 		t.Run("", func(t *testing.T) {
 			k := m * w * w
 			td := 2 * math.Pi / (w * math.Sqrt(1-zeta*zeta))
@@ -45,9 +46,9 @@ func TestDampingAgainstFreeDecay(t *testing.T) {
 
 			d, err := FromRatio(zeta)
 			require.NoError(t, err)
-			assert.InEpsilon(t, delta, d.LogDecr, tol, "δ")
+			assert.InEpsilon(t, delta, d.LogDecr, deltaTol, "δ")
 			assert.InEpsilon(t, psi, d.SpecificCap, tol, "ψ")
-			assert.InEpsilon(t, zeta, RatioFromLogDecrement(delta), tol, "ζ from δ")
+			assert.InEpsilon(t, zeta, RatioFromLogDecrement(delta), deltaTol, "ζ from δ")
 			assert.InEpsilon(t, zeta, RatioFromSpecificCapacity(psi), 1e-8, "ζ from ψ") // log1p of a measured ψ: looser
 		})
 	}
@@ -84,6 +85,31 @@ func TestQualityFactorHalfPower(t *testing.T) {
 		require.NoError(t, err)
 		// Half-power estimate differs from 1/(2ζ) by about ζ² relative; allow 2ζ²+1e-9.
 		assert.InEpsilon(t, q, d.Q, 2*zeta*zeta+1e-9, "ζ = %g", zeta)
+	}
+}
+
+// TestLossFactorFromEnergyPerCycle checks η = ΔU/(2π U_max): the energy a
+// viscous damper c = 2ζωₙm dissipates in one cycle of x = X sin ωₙt,
+// ∮ c ẋ² dt, over 2π times the peak strain energy ½kX² (Inman, Engineering
+// Vibration, §2.7, loss factor of the equivalent hysteretic damping — from
+// memory). Integrated numerically (trapezoid rule on a periodic integrand:
+// exact to rounding).
+func TestLossFactorFromEnergyPerCycle(t *testing.T) {
+	const m, wn, x0, steps = 1.0, 2 * math.Pi * 10, 1e-3, 2000
+	k := m * wn * wn
+	for _, zeta := range []float64{0.001, 0.01, 0.05, 0.2, 0.5} {
+		c := 2 * zeta * wn * m
+		period := 2 * math.Pi / wn
+		dt := period / steps
+		du := 0.0
+		for i := range steps {
+			v := x0 * wn * math.Cos(wn*float64(i)*dt)
+			du += c * v * v * dt
+		}
+		eta := du / (2 * math.Pi * 0.5 * k * x0 * x0)
+		d, err := FromRatio(zeta)
+		require.NoError(t, err)
+		assert.InEpsilon(t, eta, d.LossFactor, 1e-12, "ζ = %g", zeta) // trapezoid on a periodic integrand is exact: round-off only
 	}
 }
 
@@ -174,6 +200,7 @@ func TestDampingBadInput(t *testing.T) {
 	}{
 		{"negative ratio", func() (Damping, error) { return FromRatio(-0.01) }},
 		{"ratio 1", func() (Damping, error) { return FromRatio(1) }},
+		{"ratio above 1", func() (Damping, error) { return FromRatio(1.5) }},
 		{"NaN ratio", func() (Damping, error) { return FromRatio(math.NaN()) }},
 		{"negative log decrement", func() (Damping, error) { return FromLogDecrement(-1) }},
 		{"infinite log decrement", func() (Damping, error) { return FromLogDecrement(math.Inf(1)) }},
