@@ -5,15 +5,18 @@ import (
 	"math"
 	"strconv"
 	"strings"
+
+	"github.com/trestle-go/trestle/springnet"
 )
 
 // Conversion factors to SI, exact by definition (NIST SP 811, Appendix B).
+// The inch and the pound-force are springnet's.
 const (
-	inch  = 0.0254              // m
-	foot  = 12 * inch           // m
-	pound = 0.45359237          // kg (avoirdupois)
-	lbf   = pound * 9.80665     // N (pound-force, standard gravity)
-	psi   = lbf / (inch * inch) // Pa
+	inch  = springnet.Inch       // m
+	foot  = 12 * inch            // m
+	pound = 0.45359237           // kg (avoirdupois)
+	lbf   = springnet.PoundForce // N (pound-force, standard gravity)
+	psi   = lbf / (inch * inch)  // Pa
 )
 
 // unitSystem says how numbers are printed in text reports. JSON output is
@@ -108,7 +111,7 @@ func (u unitSystem) density() quantity {
 	return quantity{"kg/m³", 1}
 }
 
-// area, second moment, modulus of section, mass per length.
+// area, second moment, modulus of section.
 func (u unitSystem) area() quantity {
 	if u == usUnits {
 		return quantity{"in²", 1 / (inch * inch)}
@@ -128,13 +131,6 @@ func (u unitSystem) sectionModulus() quantity {
 		return quantity{"in³", 1 / math.Pow(inch, 3)}
 	}
 	return quantity{"mm³", 1e9}
-}
-
-func (u unitSystem) lineMass() quantity {
-	if u == usUnits {
-		return quantity{"lb/ft", foot / pound}
-	}
-	return quantity{"kg/m", 1}
 }
 
 // f formats the SI value v in q's unit (number only).
