@@ -3,6 +3,7 @@ package main
 import (
 	"fmt"
 	"math"
+	"slices"
 	"strconv"
 	"strings"
 	"unicode"
@@ -38,17 +39,8 @@ func scaleOf(what, unit string, allowed map[string]float64) (float64, error) {
 			names = append(names, k)
 		}
 	}
-	return 0, fmt.Errorf("%s: unknown unit %q (use one of %s)", what, unit, strings.Join(sortedStrings(names), ", "))
-}
-
-func sortedStrings(s []string) []string {
-	out := append([]string(nil), s...)
-	for i := 1; i < len(out); i++ {
-		for j := i; j > 0 && out[j] < out[j-1]; j-- {
-			out[j], out[j-1] = out[j-1], out[j]
-		}
-	}
-	return out
+	slices.Sort(names)
+	return 0, fmt.Errorf("%s: unknown unit %q (use one of %s)", what, unit, strings.Join(names, ", "))
 }
 
 var lengthUnits = map[string]float64{"mm": 1e-3, "cm": 1e-2, "m": 1, "in": inch, "ft": foot}
