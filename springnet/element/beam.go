@@ -328,6 +328,19 @@ func (j *joints) beamDOF() Mat12 {
 	return p
 }
 
+// throughJoints returns a, a local matrix over the beam's own end DOF,
+// carried to the node DOF by the congruence Pᵀ·a·P with the static map P of
+// the releases and end springs of p (see beamDOF); a itself if p has none.
+func throughJoints(a Mat12, p BeamProps, l float64) Mat12 {
+	if !p.hasJoints() {
+		return a
+	}
+	var j joints
+	j.init(p, l)
+	pm := j.beamDOF()
+	return congruent(&a, &pm)
+}
+
 // congruent returns Pᵀ·A·P.
 func congruent(a *Mat12, p *Mat12) Mat12 {
 	var ap Mat12

@@ -31,12 +31,7 @@ package element
 // forces; compression is n < 0.
 func BeamGeometricStiffness(f Frame, p BeamProps, n float64) Mat12 {
 	kg := beamLocalGeometric(n, f.L, shearPhi(p.EIz, p.GAsY, f.L), shearPhi(p.EIy, p.GAsZ, f.L))
-	if p.hasJoints() {
-		var j joints
-		j.init(p, f.L)
-		pm := j.beamDOF()
-		kg = congruent(&kg, &pm)
-	}
+	kg = throughJoints(kg, p, f.L)
 	return toGlobal(&kg, f)
 }
 

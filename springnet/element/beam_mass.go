@@ -26,12 +26,7 @@ package element
 // BeamStiffness; p serves only for Φ and those.
 func BeamConsistentMass(f Frame, p BeamProps, m, mj float64) Mat12 {
 	ml := beamLocalMass(m, mj, f.L, shearPhi(p.EIz, p.GAsY, f.L), shearPhi(p.EIy, p.GAsZ, f.L))
-	if p.hasJoints() {
-		var j joints
-		j.init(p, f.L)
-		pm := j.beamDOF()
-		ml = congruent(&ml, &pm)
-	}
+	ml = throughJoints(ml, p, f.L)
 	return toGlobal(&ml, f)
 }
 
