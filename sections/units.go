@@ -129,16 +129,6 @@ func formatDims(vs []float64) (dims []string, unit lengthUnit) {
 	return dims, unit
 }
 
-// formatLenIn formats one SI length in unit u, falling back to an
-// attached unit of its own when u cannot carry it exactly.
-func formatLenIn(v float64, u lengthUnit) string {
-	if s, ok := u.formatIn(v, 1); ok {
-		return s
-	}
-	d, u2 := formatDims([]float64{v})
-	return d[0] + u2.name
-}
-
 // formatQty formats an SI quantity of length power p with its own unit
 // attached (mm2, cm4, m ...), choosing the shortest exact form.
 func formatQty(v float64, p int) string {
