@@ -6,6 +6,8 @@ import (
 	"sort"
 	"strconv"
 	"strings"
+
+	"github.com/trestle-go/trestle/springnet"
 )
 
 // dims are the exponents of length, mass and time of a quantity; angles
@@ -48,11 +50,13 @@ var atoms = map[string]scale{
 	"um": {1, 1e6, dimLength}, "µm": {1, 1e6, dimLength}, "μm": {1, 1e6, dimLength}, "km": {1000, 1, dimLength},
 	"in": {254, 10000, dimLength}, "ft": {3048, 10000, dimLength},
 	"n": {1, 1, dimForce}, "kn": {1000, 1, dimForce}, "mn": {1e6, 1, dimForce},
-	"lbf": {4.4482216152605, 1, dimForce}, "kip": {4448.2216152605, 1, dimForce},
+	"lbf": {springnet.PoundForce, 1, dimForce}, "kip": {1000 * springnet.PoundForce, 1, dimForce},
 	"kgf": {9.80665, 1, dimForce},
 	"kg":  {1, 1, dimMass}, "g": {1, 1000, dimMass}, "t": {1000, 1, dimMass}, "lb": {0.45359237, 1, dimMass},
 	"s": {1, 1, dims{0, 0, 1}}, "ms": {1, 1000, dims{0, 0, 1}}, "min": {60, 1, dims{0, 0, 1}},
 	"pa": {1, 1, dimStress}, "kpa": {1000, 1, dimStress}, "mpa": {1e6, 1, dimStress}, "gpa": {1e9, 1, dimStress},
+	// psi and ksi are lbf/in² rounded once (the constant expression
+	// springnet.PoundForce/(springnet.Inch²) rounds one ulp higher).
 	"psi": {6894.757293168361, 1, dimStress}, "ksi": {6894757.293168361, 1, dimStress},
 	"hz": {1, 1, dimFrequency}, "rpm": {1, 60, dimFrequency},
 	"rad": {1, 1, dimNone}, "deg": {math.Pi, 180, dimNone},
