@@ -2,7 +2,6 @@ package springnet
 
 import (
 	"errors"
-	"fmt"
 	"sort"
 
 	"github.com/trestle-go/trestle/materials"
@@ -56,7 +55,7 @@ func ComplianceSensitivity(m *Model, c CaseID, l materials.Level) ([]Sensitivity
 		// Another case tipped; only this case's solve matters.
 		err = nil
 		if cr.residual > MaxResidual {
-			err = &ConditionError{Case: fmt.Sprintf("case %q", cr.name), Residual: cr.residual}
+			err = cr.conditionError()
 		}
 	}
 	defer cr.contactState()()

@@ -83,22 +83,29 @@ func (s *Solver) Static(m *Model, st *StaticSettings) (*StaticResult, error) {
 			return nil, err
 		}
 		if cr.residual > MaxResidual && (worst == nil || cr.residual > worst.Residual) {
-			worst = &ConditionError{Case: fmt.Sprintf("case %q", cr.name), Residual: cr.residual}
+			worst = cr.conditionError()
 		}
 		if !cr.finite() {
 			return nil, fmt.Errorf("springnet: case %q: the solution is not finite; the model is singular or its values overflow", cr.name)
 		}
 		res.cases = append(res.cases, cr)
 	}
+	return res, resultError(tips, worst)
+}
+
+// resultError returns the error that goes with a result of Static or
+// Sweep: the tipping errors if a case tipped (one alone, several joined in
+// order), else worst if not nil, else nil.
+func resultError(tips []error, worst *ConditionError) error {
 	switch {
 	case len(tips) == 1:
-		return res, tips[0]
+		return tips[0]
 	case len(tips) > 1:
-		return res, errors.Join(tips...)
+		return errors.Join(tips...)
 	case worst != nil:
-		return res, worst
+		return worst
 	}
-	return res, nil
+	return nil
 }
 
 // compressionOnlyFeet returns the element indices of the
@@ -298,6 +305,12 @@ type CaseResult struct {
 // case's results mean anything; check stability against local codes and
 // licensed engineering practice.
 func (c *CaseResult) Tipped() bool { return c.tipped != nil }
+
+// conditionError returns the *ConditionError of c's residual, for a
+// caller that found it above MaxResidual.
+func (c *CaseResult) conditionError() *ConditionError {
+	return &ConditionError{Case: fmt.Sprintf("case %q", c.name), Residual: c.residual}
+}
 
 // tippedErr returns the error of a query that needs the solution of a
 // tipped case, or nil if c was solved.

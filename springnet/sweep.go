@@ -224,7 +224,7 @@ func (s *Solver) Sweep(m *Model, st *SweepSettings) (*SweepResult, error) {
 				if cr.Tipped() {
 					tips = append(tips, wrap(cr.tipped)) // one line per case and level
 				} else if cr.residual > MaxResidual {
-					keep(&ConditionError{Case: fmt.Sprintf("case %q", cr.name), Residual: cr.residual})
+					keep(cr.conditionError())
 				}
 			}
 		}
@@ -332,15 +332,7 @@ func (s *Solver) Sweep(m *Model, st *SweepSettings) (*SweepResult, error) {
 		}
 		ms.X, ms.Y, ms.Z, ms.Softest = spreadOf(kx), spreadOf(ky), spreadOf(kz), spreadOf(soft)
 	}
-	switch {
-	case len(tips) == 1:
-		return res, tips[0]
-	case len(tips) > 1:
-		return res, errors.Join(tips...)
-	case worst != nil:
-		return res, worst
-	}
-	return res, nil
+	return res, resultError(tips, worst)
 }
 
 // Sweep is Solver.Sweep with a new Solver.
