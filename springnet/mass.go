@@ -1,17 +1,5 @@
 package springnet
 
-import (
-	"github.com/trestle-go/trestle/springnet/sparse"
-)
-
-// elemLumpedMass writes the lumped mass matrix of element i [kg, kg·m²]:
-// bars half their mass at each end on the translations; beams the
-// element package's lumped matrix with HRZ rotary terms (so beam-end
-// rotations carry mass); springs and feet are massless.
-func (nt *net) elemLumpedMass(i int, k *[12][12]float64, dofs *[12]edof) int {
-	return nt.memberMass(i, Lumped, k, dofs)
-}
-
 // pointMassBlocks returns, per owner, the 6×6 rigid-body mass of the added
 // masses about the owner's reference point: for a mass m with inertia
 // tensor J (Mass.Tensor) at offset r, M = Tᵀ·diag(m, m, m, J)·T with
@@ -49,12 +37,4 @@ func (nt *net) pointMassBlocks() [][6][6]float64 {
 		}
 	}
 	return out
-}
-
-// assembleMass returns the lumped mass matrix over the free equations
-// [kg, kg·m, kg·m²]. With rigid groups it is block-diagonal rather than
-// diagonal (a lumped mass away from the group's reference point couples
-// its translation and rotation).
-func (nt *net) assembleMass(b *sparse.Builder) *sparse.Matrix {
-	return nt.assembleWith(b, nt.elemLumpedMass, nt.pointMassBlocks())
 }

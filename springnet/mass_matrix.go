@@ -37,16 +37,12 @@ func (k MassMatrix) String() string {
 	return fmt.Sprintf("MassMatrix(%d)", int(k))
 }
 
-// elemConsistentMass writes the consistent mass matrix of element i over
-// the same DOF list elemStiffness uses for bars and beams [kg, kg·m,
-// kg·m²]; springs and feet are massless (0 DOF).
-func (nt *net) elemConsistentMass(i int, k *[12][12]float64, dofs *[12]edof) int {
-	return nt.memberMass(i, Consistent, k, dofs)
-}
-
 // memberMass writes the mass matrix of the chosen kind of bar or beam i
-// over its stiffness DOF list (barMatrix, beamMatrix) and returns the
-// number of DOF; springs and feet are massless (0).
+// [kg, kg·m, kg·m²] over its stiffness DOF list (barMatrix, beamMatrix)
+// and returns the number of DOF; springs and feet are massless (0).
+// Lumped: bars half their mass at each end on the translations; beams the
+// element package's lumped matrix with HRZ rotary terms (so beam-end
+// rotations carry mass).
 func (nt *net) memberMass(i int, kind MassMatrix, k *[12][12]float64, dofs *[12]edof) int {
 	e := &nt.m.elems[i]
 	p := &nt.el[i]
@@ -72,13 +68,14 @@ func (nt *net) memberMass(i int, kind MassMatrix, k *[12][12]float64, dofs *[12]
 }
 
 // assembleMassOf returns the mass matrix of the chosen kind over the free
-// equations, point masses included through the rigid transformation
-// M = Tᵀ·diag(m, m, m, J)·T (pointMassBlocks).
+// equations [kg, kg·m, kg·m²], point masses included through the rigid
+// transformation M = Tᵀ·diag(m, m, m, J)·T (pointMassBlocks). With rigid
+// groups a lumped matrix is block-diagonal rather than diagonal (a lumped
+// mass away from the group's reference point couples its translation and
+// rotation).
 func (nt *net) assembleMassOf(b *sparse.Builder, kind MassMatrix) *sparse.Matrix {
-	if kind == Lumped {
-		return nt.assembleMass(b)
-	}
-	return nt.assembleWith(b, nt.elemConsistentMass, nt.pointMassBlocks())
+	member := func(i int, k *[12][12]float64, dofs *[12]edof) int { return nt.memberMass(i, kind, k, dofs) }
+	return nt.assembleWith(b, member, nt.pointMassBlocks())
 }
 
 // BoxInertia returns the moments of inertia [kg·m²] of a uniform

@@ -30,7 +30,7 @@ func Assemble(m *Model, l materials.Level) (*System, error) {
 	}
 	s := &System{nt: nt}
 	s.k = nt.assemble(sparse.NewBuilder(0))
-	s.m = nt.assembleMass(sparse.NewBuilder(0))
+	s.m = nt.assembleMassOf(sparse.NewBuilder(0), Lumped)
 	for c := range m.cases {
 		cl, err := nt.buildLoads(CaseID(c))
 		if err != nil {
