@@ -30,7 +30,6 @@ type Block struct {
 // minimum face shells 3/4, 1, 1-1/4, 1-3/8, 1-1/2 in and webs 3/4 in
 // (4 in) or 1 in (ASTM C90 Table 2 minimums, from memory).
 func NominalBlock(widthIn int) (Block, error) {
-	const in = 0.0254
 	fs := map[int]float64{4: 0.75, 6: 1, 8: 1.25, 10: 1.375, 12: 1.5}
 	f, ok := fs[widthIn]
 	if !ok {
@@ -40,7 +39,7 @@ func NominalBlock(widthIn int) (Block, error) {
 	if widthIn == 4 {
 		web = 0.75
 	}
-	return Block{L: 15.625 * in, W: (float64(widthIn) - 0.375) * in, FaceShell: f * in, Web: web * in}, nil
+	return Block{L: 15.625 * inch, W: (float64(widthIn) - 0.375) * inch, FaceShell: f * inch, Web: web * inch}, nil
 }
 
 func (b Block) webs() int {

@@ -29,19 +29,18 @@ type Lumber struct {
 // Dressed returns the dressed thickness and width of one ply [m], or an
 // error for a nominal size the NDS tables do not list.
 func (l Lumber) Dressed() (b, d float64, err error) {
-	const in = 0.0254
 	if l.Thick < 1 || l.Wide < l.Thick || l.Wide > 16 || l.Wide < 2 {
 		return 0, 0, fmt.Errorf("sections: %v: nominal size %dx%d is not a sawn lumber size (thickness 1–16 in, width from the thickness up to 16 in, at least 2 in)", l, l.Thick, l.Wide)
 	}
 	if l.Thick >= 5 { // timbers, NDS Supplement Table 1D
-		return (float64(l.Thick) - 0.5) * in, (float64(l.Wide) - 0.5) * in, nil
+		return (float64(l.Thick) - 0.5) * inch, (float64(l.Wide) - 0.5) * inch, nil
 	}
 	thick := map[int]float64{1: 0.75, 2: 1.5, 3: 2.5, 4: 3.5}[l.Thick]
 	wide := float64(l.Wide) - 0.5
 	if l.Wide >= 8 {
 		wide = float64(l.Wide) - 0.75
 	}
-	return thick * in, wide * in, nil
+	return thick * inch, wide * inch, nil
 }
 
 func (l Lumber) plies() int {

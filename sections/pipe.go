@@ -91,8 +91,7 @@ func (p Pipe) Tube() (RoundTube, error) {
 	if t == 0 {
 		return RoundTube{}, fmt.Errorf("sections: pipe %s: schedule %s is not made in this size", p.NPS, p.Schedule)
 	}
-	const in = 0.0254
-	return RoundTube{D: row.od * in, T: t * in, Conv: p.Conv}, nil
+	return RoundTube{D: row.od * inch, T: t * inch, Conv: p.Conv}, nil
 }
 
 // Properties returns the properties of the pipe's RoundTube.

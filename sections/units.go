@@ -15,10 +15,13 @@ type lengthUnit struct {
 	mul, div float64
 }
 
+// inch is the international inch [m], exact by definition (1959).
+const inch = 0.0254
+
 // lengthUnits lists the units of length, in the order Spec prefers them.
 var lengthUnits = [...]lengthUnit{
 	{"mm", 1, 1000},
-	{"in", 0.0254, 1}, // international inch, exact by definition (1959)
+	{"in", inch, 1},
 	{"cm", 1, 100},
 	{"m", 1, 1},
 	{"ft", 0.3048, 1}, // international foot
