@@ -145,8 +145,15 @@ func (kr *krylov) start() error {
 		kr.h[j] = 0
 	}
 	kr.k = 0
-	for i := 0; i < kr.p; i++ {
-		ok, err := kr.fresh(i)
+	return kr.freshBlock()
+}
+
+// freshBlock appends a block of p fresh rows (see fresh) at row k, and
+// marks the basis exhausted if one of them cannot be found.
+func (kr *krylov) freshBlock() error {
+	kr.exhausted = false
+	for r := 0; r < kr.p; r++ {
+		ok, err := kr.fresh(kr.k)
 		if err != nil {
 			return err
 		}
@@ -449,18 +456,7 @@ func (kr *krylov) restart(rz *ritz, keep []int, lock bool) error {
 	}
 	kr.k = kk
 	if lock || rz.exact {
-		kr.exhausted = false
-		for r := 0; r < p; r++ {
-			ok, err := kr.fresh(kk + r)
-			if err != nil {
-				return err
-			}
-			if !ok {
-				kr.exhausted = true
-			}
-			kr.k++
-		}
-		return nil
+		return kr.freshBlock()
 	}
 	for r := 0; r < p; r++ {
 		for i := 0; i < kk; i++ {
