@@ -6,6 +6,7 @@ import (
 	"math"
 	"os"
 	"path/filepath"
+	"reflect"
 	"strings"
 	"testing"
 
@@ -32,43 +33,27 @@ func exampleFiles(t testing.TB) map[string][]byte {
 }
 
 // zeroLines clears the Line fields, which differ between a file and its
-// rewrite.
-func zeroLines(c *modelfile.Contents) {
-	for i := range c.Materials {
-		c.Materials[i].Line = 0
-	}
-	for i := range c.Nodes {
-		c.Nodes[i].Line = 0
-	}
-	for i := range c.Members {
-		c.Members[i].Line = 0
-	}
-	for i := range c.Feet {
-		c.Feet[i].Line = 0
-	}
-	for i := range c.Supports {
-		c.Supports[i].Line = 0
-	}
-	for i := range c.Groups {
-		c.Groups[i].Line = 0
-	}
-	for i := range c.Mounts {
-		c.Mounts[i].Line = 0
-	}
-	for i := range c.Masses {
-		c.Masses[i].Line = 0
-	}
-	for i := range c.Cases {
-		c.Cases[i].Line = 0
-		for j := range c.Cases[i].Loads {
-			c.Cases[i].Loads[j].Line = 0
+// rewrite: every int field named Line anywhere in c.
+func zeroLines(c *modelfile.Contents) { zeroLineFields(reflect.ValueOf(c).Elem()) }
+
+func zeroLineFields(v reflect.Value) {
+	switch v.Kind() {
+	case reflect.Struct:
+		for i := 0; i < v.NumField(); i++ {
+			if f := v.Field(i); v.Type().Field(i).Name == "Line" && f.Kind() == reflect.Int && f.CanSet() {
+				f.SetInt(0)
+			} else {
+				zeroLineFields(f)
+			}
 		}
-	}
-	for i := range c.Combos {
-		c.Combos[i].Line = 0
-	}
-	for i := range c.Dynamics.Speeds {
-		c.Dynamics.Speeds[i].Line = 0
+	case reflect.Slice, reflect.Array:
+		for i := 0; i < v.Len(); i++ {
+			zeroLineFields(v.Index(i))
+		}
+	case reflect.Pointer:
+		if !v.IsNil() {
+			zeroLineFields(v.Elem())
+		}
 	}
 }
 
