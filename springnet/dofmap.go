@@ -362,7 +362,7 @@ func (nt *net) touched() []bool {
 // finiteAll reports whether every value of x is finite.
 func finiteAll(x []float64) bool {
 	for _, v := range x {
-		if math.IsNaN(v) || math.IsInf(v, 0) {
+		if !finite(v) {
 			return false
 		}
 	}

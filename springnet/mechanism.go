@@ -92,7 +92,7 @@ func (nt *net) describeNull(k *sparse.Matrix, first int) string {
 		for _, xi := range x {
 			mx = math.Max(mx, math.Abs(xi))
 		}
-		if mx == 0 || math.IsNaN(mx) || math.IsInf(mx, 0) {
+		if mx == 0 || !finite(mx) {
 			return ""
 		}
 		for i := range x {
