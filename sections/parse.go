@@ -3,7 +3,9 @@ package sections
 import (
 	"errors"
 	"fmt"
+	"maps"
 	"regexp"
+	"slices"
 	"strconv"
 	"strings"
 	"unicode"
@@ -222,9 +224,9 @@ func unknownKind(k string) error {
 			best, bestD = n, d
 		}
 	}
-	for a, n := range aliases {
+	for _, a := range slices.Sorted(maps.Keys(aliases)) { // sorted: a tie names the same shape every time
 		if d := materials.EditDistance(k, a); d < bestD {
-			best, bestD = n, d
+			best, bestD = aliases[a], d
 		}
 	}
 	if looksNumeric(k) {

@@ -97,6 +97,9 @@ func TestParseBad(t *testing.T) {
 		{"   ", "empty"},
 		{"rund 40 mm", `did you mean "round"`},
 		{"squaretube 50x3 mm", `did you mean "square-tube"`},
+		// "hs" is one edit from the aliases chs, rhs and shs: the tie goes to
+		// the first alias in sort order (chs, a round tube), every time.
+		{"hs 50x3 mm", `did you mean "round-tube"`},
 		{"wibble", "unknown shape"},
 		{"100x20 mm", "give the shape first"},
 		{"round-tube 60.3x3.2", "missing unit"},
