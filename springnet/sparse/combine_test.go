@@ -2,6 +2,7 @@ package sparse
 
 import (
 	"fmt"
+	"math"
 	"math/rand/v2"
 	"testing"
 
@@ -52,7 +53,7 @@ func TestCombineMatchesBuilder(t *testing.T) {
 			for j := 0; j < n; j++ {
 				for i := j; i < n; i++ {
 					w := sum.At(i, j)
-					assert.InDelta(t, w, dst.At(i, j), tol*(1+abs(w)), "(%d, %d)", i, j)
+					assert.InDelta(t, w, dst.At(i, j), tol*(1+math.Abs(w)), "(%d, %d)", i, j)
 				}
 			}
 		})

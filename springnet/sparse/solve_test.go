@@ -1,6 +1,7 @@
 package sparse
 
 import (
+	"math"
 	"math/rand/v2"
 	"testing"
 
@@ -39,8 +40,8 @@ func TestSolveManyMatchesSolve(t *testing.T) {
 	for r := range b {
 		assert.Less(t, Residual(a, got[r], b[r]), residualTol)
 		for i := range got[r] {
-			assert.InDelta(t, want[r][i], got[r][i], solutionTol*(1+abs(want[r][i])))
-			assert.InDelta(t, want[r][i], block[r*n+i], solutionTol*(1+abs(want[r][i])))
+			assert.InDelta(t, want[r][i], got[r][i], solutionTol*(1+math.Abs(want[r][i])))
+			assert.InDelta(t, want[r][i], block[r*n+i], solutionTol*(1+math.Abs(want[r][i])))
 		}
 	}
 	st := f.Stats()
