@@ -357,17 +357,15 @@ func (rd *reader) materials(top *tab, order map[string][]string, c *Contents) {
 		if r, ok := sub.rng("G", qStress); ok {
 			m.G = r
 		}
-		if v, ok := sub.num("poisson", qNone); ok {
-			m.Poisson = v
-		}
-		if v, ok := sub.num("density", qDensity); ok {
-			m.Density = v
-		}
-		if v, ok := sub.num("strength", qStress); ok {
-			m.Yield = v
-		}
-		if v, ok := sub.num("compressive-strength", qStress); ok {
-			m.Compress = v
+		for _, f := range []struct {
+			k   string
+			q   quantity
+			dst *float64
+		}{{"poisson", qNone, &m.Poisson}, {"density", qDensity, &m.Density},
+			{"strength", qStress, &m.Yield}, {"compressive-strength", qStress, &m.Compress}} {
+			if v, ok := sub.num(f.k, f.q); ok {
+				*f.dst = v
+			}
 		}
 		if r, ok := sub.rng("loss-factor", qNone); ok {
 			m.Loss = r
