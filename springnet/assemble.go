@@ -238,6 +238,17 @@ func (d *dofMap) addOwnerLoad(dst [][6]float64, o int, at Vec, f, mo Vec) {
 	dst[o][5] += mo.Z
 }
 
+// totalLoad returns the load vector of case loads cl over the free
+// equations: gravity plus the other loads.
+func (d *dofMap) totalLoad(cl *caseLoads) []float64 {
+	f := d.eqVector(nil, cl.grav)
+	fv := d.eqVector(nil, cl.vari)
+	for i := range f {
+		f[i] += fv[i]
+	}
+	return f
+}
+
 // eqVector scatters owner loads onto the free equations.
 func (d *dofMap) eqVector(dst []float64, ol [][6]float64) []float64 {
 	if dst == nil {

@@ -140,11 +140,7 @@ func (s *Solver) solveCaseOn(nt *net, c CaseID, cl *caseLoads, co []int, factore
 // solveCase solves one case with the current factorisation and recovers
 // its results.
 func (s *Solver) solveCase(nt *net, c CaseID, cl *caseLoads) *CaseResult {
-	f := nt.dm.eqVector(nil, cl.grav)
-	fv := nt.dm.eqVector(nil, cl.vari)
-	for i := range f {
-		f[i] += fv[i]
-	}
+	f := nt.dm.totalLoad(cl)
 	u := make([]float64, len(f))
 	r := s.solve(u, f)
 	return nt.recover(c, cl, u, r)

@@ -36,12 +36,7 @@ func Assemble(m *Model, l materials.Level) (*System, error) {
 		if err != nil {
 			return nil, err
 		}
-		f := nt.dm.eqVector(nil, cl.grav)
-		fv := nt.dm.eqVector(nil, cl.vari)
-		for i := range f {
-			f[i] += fv[i]
-		}
-		s.loads = append(s.loads, f)
+		s.loads = append(s.loads, nt.dm.totalLoad(cl))
 	}
 	return s, nil
 }
