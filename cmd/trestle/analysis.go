@@ -406,14 +406,9 @@ func governing(rep *AnalysisReport) Governing {
 			g.TippingFactor, g.TippingCase = &f, c.Name
 		}
 	}
-	if rep.Modes != nil {
-		for _, md := range rep.Modes.Modes {
-			if !md.RigidBody {
-				f := md.FrequencyHz
-				g.FirstFrequencyHz = &f
-				break
-			}
-		}
+	if i := firstElastic(rep.Modes); i >= 0 {
+		f := rep.Modes.Modes[i].FrequencyHz
+		g.FirstFrequencyHz = &f
 	}
 	for _, b := range rep.Buckling {
 		if len(b.Factors) > 0 && (g.BucklingFactor == nil || b.Factors[0] < *g.BucklingFactor) {

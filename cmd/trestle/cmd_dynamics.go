@@ -91,23 +91,14 @@ speeds given in the file. --picture draws one mode shape.`,
 		return fmt.Errorf("%s: %s", name, join(warn))
 	}
 	rep := ModesCommandReport{Schema: schemaModes, Model: name, Level: l.String(), Modes: mr, Warnings: warn, Cautions: cautions}
-	for _, md := range mr.Modes {
-		if !md.RigidBody {
-			f := md.FrequencyHz
-			rep.FirstFrequencyHz = &f
-			break
-		}
+	if i := firstElastic(mr); i >= 0 {
+		f := mr.Modes[i].FrequencyHz
+		rep.FirstFrequencyHz = &f
 	}
 	if *picture != "" {
 		i := *which - 1
 		if *which == 0 {
-			i = 0
-			for j, md := range mr.Modes {
-				if !md.RigidBody {
-					i = j
-					break
-				}
-			}
+			i = max(firstElastic(mr), 0)
 		}
 		if i < 0 || i >= len(mr.Modes) {
 			return fmt.Errorf("modes: --mode %d: the analysis found modes 1 to %d (raise --count)", *which, len(mr.Modes))
@@ -145,15 +136,24 @@ speeds given in the file. --picture draws one mode shape.`,
 // firstMotion is the motion of the first mode that is not free ("" if
 // none, or m is nil).
 func firstMotion(m *ModesReport) string {
-	if m == nil {
-		return ""
-	}
-	for _, md := range m.Modes {
-		if !md.RigidBody {
-			return md.Motion
-		}
+	if i := firstElastic(m); i >= 0 {
+		return m.Modes[i].Motion
 	}
 	return ""
+}
+
+// firstElastic is the index of the first mode of m that is not a free
+// motion (-1 if none, or m is nil).
+func firstElastic(m *ModesReport) int {
+	if m == nil {
+		return -1
+	}
+	for i, md := range m.Modes {
+		if !md.RigidBody {
+			return i
+		}
+	}
+	return -1
 }
 
 // Defaults of the response command.
