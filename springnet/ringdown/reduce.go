@@ -80,7 +80,7 @@ type config struct {
 	band Band // isolation band actually used; zero: none
 }
 
-func (s *Settings) config(rate float64, dur float64) (config, error) {
+func (s *Settings) config(rate float64) (config, error) {
 	var c config
 	if s != nil {
 		c.Settings = *s
@@ -142,7 +142,7 @@ func Reduce(rec Record, s *Settings) (Result, error) {
 	if err := rec.Check(); err != nil {
 		return Result{}, err
 	}
-	cfg, err := s.config(rec.Rate, rec.Duration())
+	cfg, err := s.config(rec.Rate)
 	if err != nil {
 		return Result{}, err
 	}
