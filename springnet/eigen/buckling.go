@@ -20,22 +20,10 @@ import (
 // positive load factors (for example, every member in tension), Buckling
 // returns those found with a *FewerModesError.
 func Buckling(K, Kg *sparse.Matrix, n int, s *Settings) (*Result, error) {
-	if K == nil || Kg == nil {
-		return nil, errors.New("eigen: Buckling: nil matrix")
+	if err := checkPair("Buckling", "Kg", K, Kg, n); err != nil {
+		return nil, err
 	}
 	N := K.N()
-	if Kg.N() != N {
-		return nil, fmt.Errorf("eigen: Buckling: K is %d×%d but Kg is %d×%d", N, N, Kg.N(), Kg.N())
-	}
-	if n < 1 || n > N {
-		return nil, fmt.Errorf("eigen: Buckling: asked for %d modes of a problem of order %d", n, N)
-	}
-	if err := checkMatrix("K", K); err != nil {
-		return nil, err
-	}
-	if err := checkMatrix("Kg", Kg); err != nil {
-		return nil, err
-	}
 	st := s.withDefaults(n, N)
 	if st.Coords != nil && len(st.Coords) != N {
 		return nil, fmt.Errorf("eigen: Buckling: %d coordinates for %d DOF", len(st.Coords), N)

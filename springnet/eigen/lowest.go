@@ -20,22 +20,10 @@ import (
 // DOF), Lowest returns the Result with those that exist together with a
 // *FewerModesError.
 func Lowest(K, M *sparse.Matrix, n int, s *Settings) (*Result, error) {
-	if K == nil || M == nil {
-		return nil, errors.New("eigen: Lowest: nil matrix")
+	if err := checkPair("Lowest", "M", K, M, n); err != nil {
+		return nil, err
 	}
 	N := K.N()
-	if M.N() != N {
-		return nil, fmt.Errorf("eigen: Lowest: K is %d×%d but M is %d×%d", N, N, M.N(), M.N())
-	}
-	if n < 1 || n > N {
-		return nil, fmt.Errorf("eigen: Lowest: asked for %d modes of a problem of order %d", n, N)
-	}
-	if err := checkMatrix("K", K); err != nil {
-		return nil, err
-	}
-	if err := checkMatrix("M", M); err != nil {
-		return nil, err
-	}
 	for j := 0; j < N; j++ {
 		if d := M.At(j, j); d < 0 {
 			return nil, fmt.Errorf("eigen: Lowest: negative mass M(%d, %d) = %g", j, j, d)

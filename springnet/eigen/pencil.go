@@ -179,6 +179,26 @@ func (op *shiftInvert) applyMany(dst, x, mx [][]float64) error {
 
 func (op *shiftInvert) bmul(dst, x []float64) { op.m.MulVec(dst, x) }
 
+// checkPair checks the arguments that Lowest and Buckling (named fn in
+// the errors) share: K and B (named bName) given and of the same order N,
+// n in [1, N], and no NaN or Inf entry in either (checkMatrix).
+func checkPair(fn, bName string, K, B *sparse.Matrix, n int) error {
+	if K == nil || B == nil {
+		return fmt.Errorf("eigen: %s: nil matrix", fn)
+	}
+	N := K.N()
+	if B.N() != N {
+		return fmt.Errorf("eigen: %s: K is %d×%d but %s is %d×%d", fn, N, N, bName, B.N(), B.N())
+	}
+	if n < 1 || n > N {
+		return fmt.Errorf("eigen: %s: asked for %d modes of a problem of order %d", fn, n, N)
+	}
+	if err := checkMatrix("K", K); err != nil {
+		return err
+	}
+	return checkMatrix(bName, B)
+}
+
 // checkMatrix reports a NaN or Inf entry of a.
 func checkMatrix(name string, a *sparse.Matrix) error {
 	for j := 0; j < a.N(); j++ {
