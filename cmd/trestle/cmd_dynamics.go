@@ -113,12 +113,7 @@ speeds given in the file. --picture draws one mode shape.`,
 		return writeJSON(e.stdout, rep)
 	}
 	fmt.Fprintf(e.stdout, "trestle modes: %s (material level %s)\n", name, rep.Level)
-	if len(rep.Warnings) > 0 {
-		heading(e.stdout, "WARNINGS")
-		for _, x := range rep.Warnings {
-			fmt.Fprintf(e.stdout, "  ! %s\n", x)
-		}
-	}
+	writeWarnings(e.stdout, rep.Warnings)
 	heading(e.stdout, "GOVERNING NUMBERS")
 	if rep.FirstFrequencyHz != nil {
 		fmt.Fprintf(e.stdout, "  first natural frequency  %s Hz  (%s)\n", num(*rep.FirstFrequencyHz), firstMotion(mr))
@@ -291,12 +286,7 @@ func writeResponse(w io.Writer, r ResponseReport, u unitSystem) {
 	k := u.stiffness()
 	fmt.Fprintf(w, "trestle response: %s (material level %s)\n", r.Model, r.Level)
 	fmt.Fprintf(w, "Driving-point response, %s–%s Hz, %d modes plus a residual for the rest.\n", num(r.BandHz[0]), num(r.BandHz[1]), r.Modes)
-	if len(r.Warnings) > 0 {
-		heading(w, "WARNINGS")
-		for _, x := range r.Warnings {
-			fmt.Fprintf(w, "  ! %s\n", x)
-		}
-	}
+	writeWarnings(w, r.Warnings)
 	heading(w, fmt.Sprintf("GOVERNING NUMBERS: smallest dynamic stiffness in the band [%s]", k.unit))
 	tw := table(w)
 	fmt.Fprintf(tw, "  place\tdirection\tstatic\tsmallest dynamic\tat [Hz]\tdrop\n")

@@ -259,12 +259,7 @@ func spread(vals []*float64, nominal int) (float64, bool) {
 func writeRanges(w io.Writer, r RangesReport, u unitSystem) {
 	fmt.Fprintf(w, "trestle ranges: %s\n", r.Model)
 	fmt.Fprintf(w, "Every material and spring at the low, nominal and high end of its range.\n")
-	if len(r.Warnings) > 0 {
-		heading(w, "WARNINGS")
-		for _, x := range r.Warnings {
-			fmt.Fprintf(w, "  ! %s\n", x)
-		}
-	}
+	writeWarnings(w, r.Warnings)
 	gs := make([]Governing, len(r.Levels))
 	for i, l := range r.Levels {
 		gs[i] = l.Governing

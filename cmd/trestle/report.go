@@ -69,6 +69,18 @@ func heading(w io.Writer, s string) {
 	fmt.Fprintf(w, "\n%s\n%s\n", s, strings.Repeat("─", len([]rune(s))))
 }
 
+// writeWarnings prints the WARNINGS section, one "!" line per warning
+// (nothing when there are none).
+func writeWarnings(w io.Writer, warnings []string) {
+	if len(warnings) == 0 {
+		return
+	}
+	heading(w, "WARNINGS")
+	for _, x := range warnings {
+		fmt.Fprintf(w, "  ! %s\n", x)
+	}
+}
+
 // direction words a unit vector: the axis it is close to, else its
 // components.
 func direction(d [3]float64) string {
@@ -121,12 +133,7 @@ func writeAnalysis(w io.Writer, r *AnalysisReport, u unitSystem) {
 	}
 	fmt.Fprintln(w)
 
-	if len(r.Warnings) > 0 {
-		heading(w, "WARNINGS")
-		for _, x := range r.Warnings {
-			fmt.Fprintf(w, "  ! %s\n", x)
-		}
-	}
+	writeWarnings(w, r.Warnings)
 
 	g := r.Governing
 	heading(w, "GOVERNING NUMBERS")
