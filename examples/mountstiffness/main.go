@@ -40,7 +40,6 @@ func run(args []string, w io.Writer) error {
 	if f.Model.NumMounts() == 0 {
 		return fmt.Errorf("%s: no mounts to measure", name)
 	}
-	const perUm = 1e6 // N/m per N/µm
 	fmt.Fprintf(w, "%s\n", f.Title)
 	for p := 0; p < f.Model.NumMounts(); p++ {
 		id := springnet.MountID(p)
@@ -53,7 +52,7 @@ func run(args []string, w io.Writer) error {
 			k, dir := ps.Principal()
 			fmt.Fprintf(w, "  %-8v", lv)
 			for i := range k {
-				fmt.Fprintf(w, "  %8.4g N/um along (%.2f, %.2f, %.2f)", k[i]/perUm, dir[i].X, dir[i].Y, dir[i].Z)
+				fmt.Fprintf(w, "  %8.4g N/um along (%.2f, %.2f, %.2f)", springnet.NPerMicron(k[i]), dir[i].X, dir[i].Y, dir[i].Z)
 			}
 			fmt.Fprintln(w)
 		}
