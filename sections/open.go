@@ -122,7 +122,7 @@ func (a Angle) Properties() (Props, error) {
 	return finish(ap, j, 5.0/6*a.B*a.T, 5.0/6*a.H*a.T, []Loop{l}), nil
 }
 
-func checkFlanged(what string, h, b, tw, tf, r float64, webs float64) error {
+func checkFlanged(h, b, tw, tf, r float64, webs float64) error {
 	if err := checkLengths("depth H", h, "width B", b, "web TW", tw, "flange TF", tf); err != nil {
 		return err
 	}
@@ -145,7 +145,7 @@ func checkFlanged(what string, h, b, tw, tf, r float64, webs float64) error {
 // out of J. Shear areas: AsZ = H·TW (web), AsY = 5/6·2·B·TF (flanges);
 // common practice.
 func (c Channel) Properties() (Props, error) {
-	if err := checkFlanged("channel", c.H, c.B, c.TW, c.TF, c.R, 1); err != nil {
+	if err := checkFlanged(c.H, c.B, c.TW, c.TF, c.R, 1); err != nil {
 		return Props{}, fmt.Errorf("sections: %v: %w", c, err)
 	}
 	h2 := c.H / 2
@@ -180,7 +180,7 @@ func (c Channel) Properties() (Props, error) {
 // Shear areas: AsZ = H·TW (the web, AISC 360-16 §G2.1 uses d·tw),
 // AsY = 5/6·2·B·TF (flanges); common practice.
 func (s IShape) Properties() (Props, error) {
-	if err := checkFlanged("i-shape", s.H, s.B, s.TW, s.TF, s.R, 2); err != nil {
+	if err := checkFlanged(s.H, s.B, s.TW, s.TF, s.R, 2); err != nil {
 		return Props{}, fmt.Errorf("sections: %v: %w", s, err)
 	}
 	h2, w2 := s.H/2, s.TW/2
