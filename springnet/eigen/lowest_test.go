@@ -189,16 +189,26 @@ func assertMOrthonormal(t *testing.T, res *eigen.Result, m *sparse.Matrix) {
 // chain builds a spring–mass chain of n equal masses m joined by equal
 // springs k; fixed adds a spring from the first mass to the ground.
 func chain(n int, k, m float64, fixed bool) (K, M *sparse.Matrix) {
-	bk, bm := sparse.NewBuilder(n), sparse.NewBuilder(n)
-	if fixed {
-		bk.Add(0, 0, k)
+	return chains(1, n, k, m, fixed)
+}
+
+// chains returns copies unconnected copies of chain(n, k, m, fixed), one
+// after the other (block-diagonal).
+func chains(copies, n int, k, m float64, fixed bool) (K, M *sparse.Matrix) {
+	N := copies * n
+	bk, bm := sparse.NewBuilder(N), sparse.NewBuilder(N)
+	for c := 0; c < copies; c++ {
+		o := c * n
+		if fixed {
+			bk.Add(o, o, k)
+		}
+		for i := 1; i < n; i++ {
+			bk.Add(o+i-1, o+i-1, k)
+			bk.Add(o+i, o+i, k)
+			bk.Add(o+i, o+i-1, -k)
+		}
 	}
-	for i := 1; i < n; i++ {
-		bk.Add(i-1, i-1, k)
-		bk.Add(i, i, k)
-		bk.Add(i, i-1, -k)
-	}
-	for i := 0; i < n; i++ {
+	for i := 0; i < N; i++ {
 		bm.Add(i, i, m)
 	}
 	return bk.Matrix(), bm.Matrix()
@@ -266,21 +276,7 @@ func TestChainClosedForm(t *testing.T) {
 // search), never return a short list silently.
 func TestRepeatedEigenvalues(t *testing.T) {
 	const n, k, m = 60, 1e4, 1.0
-	N := 2 * n
-	bk, bm := sparse.NewBuilder(N), sparse.NewBuilder(N)
-	for c := 0; c < 2; c++ {
-		o := c * n
-		bk.Add(o, o, k)
-		for i := 1; i < n; i++ {
-			bk.Add(o+i-1, o+i-1, k)
-			bk.Add(o+i, o+i, k)
-			bk.Add(o+i, o+i-1, -k)
-		}
-	}
-	for i := 0; i < N; i++ {
-		bm.Add(i, i, m)
-	}
-	K, M := bk.Matrix(), bm.Matrix()
+	K, M := chains(2, n, k, m, true)
 	for _, block := range []int{1, 2, 3} {
 		t.Run(fmt.Sprintf("block%d", block), func(t *testing.T) {
 			res, err := eigen.Lowest(K, M, 6, &eigen.Settings{BlockSize: block})
@@ -409,20 +405,7 @@ func TestLowestUserShift(t *testing.T) {
 // the block size. All must be found (continuing after the Sturm check).
 func TestManyRigidModes(t *testing.T) {
 	const n, k, m, copies = 30, 1e4, 2.0, 4
-	N := copies * n
-	bk, bm := sparse.NewBuilder(N), sparse.NewBuilder(N)
-	for c := 0; c < copies; c++ {
-		o := c * n
-		for i := 1; i < n; i++ {
-			bk.Add(o+i-1, o+i-1, k)
-			bk.Add(o+i, o+i, k)
-			bk.Add(o+i, o+i-1, -k)
-		}
-	}
-	for i := 0; i < N; i++ {
-		bm.Add(i, i, m)
-	}
-	K, M := bk.Matrix(), bm.Matrix()
+	K, M := chains(copies, n, k, m, false)
 	res, err := eigen.Lowest(K, M, 2*copies, nil)
 	require.NoError(t, err)
 	for i := 0; i < copies; i++ {
