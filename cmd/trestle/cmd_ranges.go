@@ -307,12 +307,7 @@ func writeRanges(w io.Writer, r RangesReport, u unitSystem) {
 		}
 		tw.Flush()
 	}
-	if len(r.Pending) > 0 {
-		heading(w, "NOT IN THIS REPORT")
-		for _, p := range r.Pending {
-			fmt.Fprintf(w, "  – %s\n", p)
-		}
-	}
+	writePending(w, r.Pending)
 	writeCautions(w)
 }
 

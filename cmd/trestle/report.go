@@ -81,6 +81,18 @@ func writeWarnings(w io.Writer, warnings []string) {
 	}
 }
 
+// writePending prints the NOT IN THIS REPORT section (nothing when
+// pending is empty).
+func writePending(w io.Writer, pending []string) {
+	if len(pending) == 0 {
+		return
+	}
+	heading(w, "NOT IN THIS REPORT")
+	for _, p := range pending {
+		fmt.Fprintf(w, "  – %s\n", p)
+	}
+}
+
 // direction words a unit vector: the axis it is close to, else its
 // components.
 func direction(d [3]float64) string {
@@ -311,12 +323,7 @@ func writeAnalysis(w io.Writer, r *AnalysisReport, u unitSystem) {
 		fmt.Fprintf(w, "\n  Check: applied FZ %s, reactions FZ %s; equilibrium error force %s, moment %s; solve residual %s\n",
 			f.fu(eq.AppliedN[2]), f.fu(eq.ReactionsN[2]), small(eq.ForceError), small(eq.MomentError), small(c.Residual))
 	}
-	if len(r.Pending) > 0 {
-		heading(w, "NOT IN THIS REPORT")
-		for _, p := range r.Pending {
-			fmt.Fprintf(w, "  – %s\n", p)
-		}
-	}
+	writePending(w, r.Pending)
 	writeCautions(w)
 }
 
