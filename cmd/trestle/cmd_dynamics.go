@@ -63,11 +63,10 @@ speeds given in the file. --picture draws one mode shape.`,
 	level := fl.levelFlag()
 	picture := fl.String("picture", "", "draw a mode shape to this `file` (.svg or .png)")
 	which := fl.Int("mode", 0, "mode to draw (from 1); default the first that is not a free motion")
-	pos, u, err := fl.parseReport(e.args, 1, 1, &of)
+	pos, _, err := fl.parseReport(e.args, 1, 1, &of) // modes prints Hz only: --units is read (and checked) but changes nothing
 	if err != nil {
 		return handled(err)
 	}
-	_ = u
 	if *count < 0 {
 		return fmt.Errorf("modes: --count %d: want a positive number", *count)
 	}
