@@ -205,20 +205,11 @@ func (bk *energyBook) split(nt *net, i int, x *[12]float64, w []float64) []float
 		p := &nt.el[i]
 		// Full 12 end values (the beam has rotations at both ends).
 		var unit [4]float64
-		for c, bp := range [4]element.BeamProps{{EA: 1}, {EIy: 1}, {EIz: 1}, {GJ: 1}} {
-			if !(p.rotA && p.rotB) {
-				break
+		if p.rotA && p.rotB {
+			for c, bp := range [4]element.BeamProps{{EA: 1}, {EIy: 1}, {EIz: 1}, {GJ: 1}} {
+				kb := element.BeamStiffness(p.frame, bp)
+				unit[c] = quadHalf((*[12][12]float64)(&kb), 12, x)
 			}
-			kb := element.BeamStiffness(p.frame, bp)
-			s := 0.0
-			for a := 0; a < 12; a++ {
-				r := 0.0
-				for b := 0; b < 12; b++ {
-					r += kb[a][b] * x[b]
-				}
-				s += x[a] * r
-			}
-			unit[c] = s / 2
 		}
 		for j, pt := range ps {
 			w[j] = pt.ea*unit[0] + pt.eiy*unit[1] + pt.eiz*unit[2] + pt.gj*unit[3]
