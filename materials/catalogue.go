@@ -10,7 +10,7 @@ import (
 // memory" marks a value recalled rather than checked against the text,
 // "common practice" a rule of thumb.
 
-const psi = 6894.757293168 // Pa per lb/in² (exact by definition of the pound and inch)
+const psi = 6894.757293168 // Pa per lb/in², to 13 figures (exactly 4.4482216152605 N / 0.0254² m²; NIST SP 811)
 
 // Loss factor ranges shared by several entries.
 func steelLoss() (Range, Source) {
