@@ -46,14 +46,7 @@ type BeamForces struct {
 func BeamEndForces(f Frame, p BeamProps, ua, ub Vec6) BeamForces {
 	u := beamEndDisp(f, p, ua, ub)
 	kb := BeamLocalStiffness(p, f.L)
-	var out BeamForces
-	for r := range 12 {
-		s := 0.0
-		for c := range 12 {
-			s += kb[r][c] * u[c]
-		}
-		out.Local[r] = s
-	}
+	out := BeamForces{Local: mulVec(&kb, &u)}
 	l := out.Local
 	out.A = SectionForces{N: -l[0], Vy: -l[1], Vz: -l[2], T: -l[3], My: -l[4], Mz: -l[5]}
 	out.B = SectionForces{N: l[6], Vy: l[7], Vz: l[8], T: l[9], My: l[10], Mz: l[11]}
@@ -85,11 +78,16 @@ func beamEndDisp(f Frame, p BeamProps, ua, ub Vec6) Vec12 {
 	var j joints
 	j.init(p, f.L)
 	pm := j.beamDOF()
+	return mulVec(&pm, &u)
+}
+
+// mulVec returns a·u.
+func mulVec(a *Mat12, u *Vec12) Vec12 {
 	var out Vec12
 	for r := range 12 {
 		s := 0.0
 		for c := range 12 {
-			s += pm[r][c] * u[c]
+			s += a[r][c] * u[c]
 		}
 		out[r] = s
 	}
